@@ -36,9 +36,11 @@ public sealed class SmtComparisonTests(ITestOutputHelper output)
         for (int i = 0; i < graphs; i++)
         {
             var field = Fields[i % Fields.Length];
-            var g = RandomGraphs.Make(rng, rng.Next(2, 13), 0.15 + 0.35 * rng.NextDouble(), 12, WeightsFor(field), 0.5, 0.15);
+            var g = RandomGraphs.Make(rng, rng.Next(2, 13), 0.15 + 0.35 * rng.NextDouble(), 12, WeightsFor(field), 0.6, 0.1);
             var rg = ReferenceGraph.From(g);
             Count($"nodes {(rg.Count <= 6 ? "2-6" : rg.Count <= 9 ? "7-9" : "10-12")}");
+            int m = rg.Measured.Length;
+            Count($"measured {(m <= 3 ? "0-3" : m <= 6 ? "4-6" : "7-12")}");
             foreach (var kind in new[] { ReferenceKind.General, ReferenceKind.Causal })
             {
                 var solver = CertifiedSolve.Run(g, field, kind)!.Value;
