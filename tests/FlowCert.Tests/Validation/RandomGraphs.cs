@@ -38,4 +38,28 @@ public static class RandomGraphs
         var inputs = names.Where(_ => rng.NextDouble() < inputShare).ToList();
         return new OpenGraph(names, edges, inputs, outputs);
     }
+
+    /// <summary>
+    /// A graph that often has a flow with many measured nodes: <paramref name="chains"/> disjoint paths
+    /// (each starts at an input and ends at an output) cover the nodes, then extra edges are added with
+    /// probability <paramref name="extraDensity"/>. Random weights from <paramref name="weights"/>.
+    /// </summary>
+    public static OpenGraph MakeWithChains(Random rng, int nodes, int chains, double extraDensity, string[] weights)
+    {
+        var names = Enumerable.Range(0, nodes).Select(i => "v" + i).ToArray();
+        var order = names.OrderBy(_ => rng.Next()).ToArray();
+        var chainOf = new List<string>[chains];
+        for (int c = 0; c < chains; c++) chainOf[c] = [];
+        for (int i = 0; i < nodes; i++) chainOf[i < chains ? i : rng.Next(chains)].Add(order[i]);
+        var edges = new Dictionary<(string, string), Rational>();
+        Rational W() { Rational.TryParse(weights[rng.Next(weights.Length)], out var w); return w; }
+        (string, string) Key(string a, string b) => string.CompareOrdinal(a, b) < 0 ? (a, b) : (b, a);
+        foreach (var chain in chainOf)
+            for (int k = 0; k + 1 < chain.Count; k++) edges[Key(chain[k], chain[k + 1])] = W();
+        for (int i = 0; i < nodes; i++)
+            for (int j = i + 1; j < nodes; j++)
+                if (rng.NextDouble() < extraDensity) edges.TryAdd(Key(names[i], names[j]), W());
+        return new OpenGraph(names, edges.Select(kv => (kv.Key.Item1, kv.Key.Item2, kv.Value)),
+            chainOf.Select(c => c[0]), chainOf.Select(c => c[^1]));
+    }
 }
