@@ -15,9 +15,12 @@ namespace FlowCert.Drawing;
 public static class SvgPicture
 {
     internal const double Radius = 11, Stub = 24;
-    internal const string EdgeColour = "#8f99a3", CorrectionColour = "#d9730d", WireColour = "#1f2933", TextColour = "#1f2933";
-    internal const string MeasuredFill = "#e3eefa", MeasuredStroke = "#2f5d8a", OutputFill = "#dff2df", OutputStroke = "#2e7d32";
-    internal const string BlockedFill = "#fbe0e0", BlockedStroke = "#c62828";
+    /// <summary>The palette of every picture (SVG and DOT).</summary>
+    public const string EdgeColour = "#8f99a3", CorrectionColour = "#d9730d", WireColour = "#1f2933", TextColour = "#1f2933";
+    /// <summary>Node fills and outlines by role.</summary>
+    public const string MeasuredFill = "#e3eefa", MeasuredStroke = "#2f5d8a", OutputFill = "#dff2df", OutputStroke = "#2e7d32";
+    /// <summary>Fill and outline of the nodes of a blocked set.</summary>
+    public const string BlockedFill = "#fbe0e0", BlockedStroke = "#c62828";
 
     public static string Write(FlowPicture p)
     {
@@ -40,7 +43,7 @@ public static class SvgPicture
         s.Append(Marker("correction-head", CorrectionColour));
         s.Append(Marker("wire-head", WireColour));
         s.Append("</defs>\n");
-        s.Append($"<rect x=\"0\" y=\"0\" width=\"{F(width)}\" height=\"{F(height)}\" fill=\"#ffffff\"/>\n");
+        s.Append($"<rect x=\"0.0\" y=\"0.0\" width=\"{F(width)}\" height=\"{F(height)}\" fill=\"#ffffff\"/>\n");
         s.Append($"<text x=\"20.0\" y=\"32.0\" font-size=\"16\" font-weight=\"bold\" fill=\"{TextColour}\">{Escape(p.Title)}</text>\n");
         s.Append($"<text x=\"20.0\" y=\"52.0\" font-size=\"12\" fill=\"#52606d\">{Escape(subtitle)}</text>\n");
 
