@@ -52,22 +52,22 @@ public static class SvgPicture
             s.Append($"<text x=\"{F(x)}\" y=\"{F(PictureLayout.Top - 38)}\">{Escape(text)}</text>\n");
         s.Append("</g>\n");
 
-        s.Append($"<g id=\"edges\" stroke=\"{EdgeColour}\" stroke-width=\"1.6\">\n");
-        foreach (var e in g.Edges)
-            s.Append($"<line x1=\"{F(p.X[e.U])}\" y1=\"{F(p.Y[e.U])}\" x2=\"{F(p.X[e.V])}\" y2=\"{F(p.Y[e.V])}\"/>\n");
+        var routes = EdgeRoutes.For(p);
+        s.Append($"<g id=\"edges\" fill=\"none\" stroke=\"{EdgeColour}\" stroke-width=\"1.6\">\n");
+        foreach (var route in routes) s.Append(route.Element).Append('\n');
         s.Append("</g>\n");
         if (p.ShowLabels)
         {
             s.Append("<g id=\"weights\" font-size=\"10\" fill=\"#3e4c59\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">\n");
-            foreach (var e in g.Edges.Where(e => e.Weight != Algebra.Rational.One))
+            for (int k = 0; k < g.Edges.Count; k++)
             {
+                if (g.Edges[k].Weight == Algebra.Rational.One) continue;
                 // Beside a steep edge, above a flat one, so the label never sits on the line or under a name.
-                double mx = (p.X[e.U] + p.X[e.V]) / 2, my = (p.Y[e.U] + p.Y[e.V]) / 2;
-                bool steep = Math.Abs(p.Y[e.U] - p.Y[e.V]) > Math.Abs(p.X[e.U] - p.X[e.V]);
+                var (_, mx, my, steep) = routes[k];
                 s.Append(steep
                     ? $"<text x=\"{F(mx + 5)}\" y=\"{F(my + 3.5)}\" text-anchor=\"start\">"
                     : $"<text x=\"{F(mx)}\" y=\"{F(my - 4)}\" text-anchor=\"middle\">");
-                s.Append(Escape(e.Weight.ToString())).Append("</text>\n");
+                s.Append(Escape(g.Edges[k].Weight.ToString())).Append("</text>\n");
             }
             s.Append("</g>\n");
         }

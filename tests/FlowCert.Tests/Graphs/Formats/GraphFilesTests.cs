@@ -64,7 +64,7 @@ public class GraphFilesTests
     {
         var g = LatticeFamilyTests.Make("cubic", "2x2x2");
         var text = GraphFiles.Write(g, GraphFileFormat.Ograph);
-        Assert.Contains("at x1y1z1 1.4 0.7\n", text);
+        Assert.Contains("at x1y1z1 2.8 1.4\n", text);
         var back = GraphFiles.Parse(text, "c.ograph", GraphFileFormat.Ograph);
         Assert.Equal(g.Positions.OrderBy(p => p.Key), back.Positions.OrderBy(p => p.Key));
     }
