@@ -181,6 +181,27 @@ public class SolveCommandTests
         w.AssertExactly("wire.ograph", "sub/");
     }
 
+    [Theory]
+    [InlineData("graph")]
+    [InlineData("out")]
+    [InlineData("out-dir")]
+    public void AnEmptyPathIsBadInputNotAnInternalError(string which)
+    {
+        using var w = new Workspace();
+        var graph = w.Write("wire.ograph", Designs.Wire);
+        var run = which switch
+        {
+            "graph" => Flowcert.InProcess("solve", ""),
+            "out" => Flowcert.InProcess("solve", graph, "--out", ""),
+            _ => Flowcert.InProcess("demo", "--out-dir", ""),
+        };
+        Assert.True(run.ExitCode == 2, run.ToString());
+        Assert.DoesNotContain("internal error", run.Stderr);
+        Assert.DoesNotContain("   at ", run.Stderr); // no stack trace
+        Assert.Contains("empty", run.Stderr);
+        w.AssertExactly("wire.ograph");
+    }
+
     [Fact]
     public void AnUnknownFlowKindExitsTwo()
     {
