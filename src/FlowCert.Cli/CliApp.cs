@@ -50,6 +50,12 @@ public static class CliApp
         }
     }
 
+    /// <summary>Refuses an empty path (the file APIs would throw an ArgumentException, reported as an internal error).</summary>
+    public static void RequirePath(string path, string what)
+    {
+        if (string.IsNullOrEmpty(path)) throw new UserInputException($"{what} is empty: give a file or folder name.");
+    }
+
     /// <summary>Parses --flow.</summary>
     public static FlowKind ParseKind(string text) => text switch
     {

@@ -25,6 +25,8 @@ public static class SolveCommand
 
     public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout)
     {
+        CliApp.RequirePath(graphPath, "the graph file");
+        if (outPath is not null) CliApp.RequirePath(outPath, "--out");
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
