@@ -7,7 +7,8 @@ namespace FlowCert.Tests.Algebra;
 /// the dense elimination (itself checked against a reference rank in DenseMatrixTests): rank, left
 /// kernel, and SolveUnitVectors, which must return exactly the rows r with e_r in the column space, each
 /// with a solution that multiplies back to e_r, lives on the pivot columns (the greedy column basis), and
-/// does not depend on the order of the rows.
+/// does not depend on the order of the rows. The packed F_2 form (<see cref="BitElimination"/>) must
+/// pass the same checks.
 /// </summary>
 public class SparseEliminationTests
 {
@@ -54,9 +55,11 @@ public class SparseEliminationTests
     private static T[] Unit<T, TField>(TField f, int n, int r) where T : struct where TField : struct, IField<T>
         => Enumerable.Range(0, n).Select(i => i == r ? f.One : f.Zero).ToArray();
 
-    private static void Check<T, TField>(TField f, ulong prime, Func<Random, T> nonZero, int seed, int count)
+    private static void Check<T, TField>(TField f, ulong prime, Func<Random, T> nonZero, int seed, int count,
+        Func<SparseVector<T>[], IEliminationResult<T>>? eliminate = null)
         where T : struct where TField : struct, IField<T>
     {
+        eliminate ??= rows => new SparseElimination<T, TField>(f, rows);
         var rng = new Random(seed);
         int solvedRows = 0, blockedRows = 0;
         for (int t = 0; t < count; t++)
@@ -66,7 +69,7 @@ public class SparseEliminationTests
             var dense = Dense(f, c);
             var (_, densePivots) = dense.RowReduce();
             var pivotIds = densePivots.Select(j => c.ColumnIds[j]).ToHashSet();
-            var e = new SparseElimination<T, TField>(f, c.Rows);
+            var e = eliminate(c.Rows);
 
             Assert.Equal(dense.Rank(), e.Rank);
 
@@ -114,7 +117,7 @@ public class SparseEliminationTests
 
             // Shuffled rows: the same rank, the same kernel size, the same solution for every row.
             var perm = Enumerable.Range(0, m).OrderBy(_ => rng.Next()).ToArray();
-            var shuffled = new SparseElimination<T, TField>(f, perm.Select(i => c.Rows[i]).ToArray());
+            var shuffled = eliminate(perm.Select(i => c.Rows[i]).ToArray());
             Assert.Equal(e.Rank, shuffled.Rank);
             Assert.Equal(kernel.Count, shuffled.LeftKernel().Count);
             var again = shuffled.SolveUnitVectors();
@@ -141,6 +144,14 @@ public class SparseEliminationTests
 
     [Fact]
     public void OverF2() => Check<ulong, PrimeField>(new PrimeField(2), 2, _ => 1UL, 22, 400);
+
+    [Fact]
+    public void OverF2PackedIntoBits() => Check<ulong, PrimeField>(new PrimeField(2), 2, _ => 1UL, 25, 400,
+        rows => new BitElimination(rows.Select(r => r.Indices).ToList()));
+
+    [Fact]
+    public void OverF2ThroughTheDispatcher() => Check<ulong, PrimeField>(new PrimeField(2), 2, _ => 1UL, 26, 400,
+        rows => Elimination.Run(new PrimeField(2), rows));
 
     [Fact]
     public void OverF3() => Check<ulong, PrimeField>(new PrimeField(3), 3, r => (ulong)r.Next(1, 3), 23, 400);
