@@ -85,7 +85,59 @@ public class PrimalityTests
     {
         var f = Factor([n]);
         Assert.Equal(prime, PrimeByFactor(f, n)); // the value remembered above is right
+        // Do not take factor's word for primality: a composite is proved by its factors (their product is
+        // checked in Factor), a prime by a Pratt certificate checked here with BigInteger.
+        if (prime) Assert.True(ProvePrime(n), $"no primality certificate for {n}");
         Assert.Equal(prime, Primality.IsPrime(n));
+    }
+
+    private static bool TrialDivisionPrime(ulong n)
+    {
+        if (n < 2) return false;
+        for (ulong d = 2; d * d <= n; d++) if (n % d == 0) return false;
+        return true;
+    }
+
+    private static bool TrialDivisionPrime(BigInteger n)
+    {
+        if (n <= ulong.MaxValue >> 2) return TrialDivisionPrime((ulong)n);
+        if (n < 2) return false;
+        for (BigInteger d = 2; d * d <= n; d++) if ((n % d).IsZero) return false;
+        return true;
+    }
+
+    /// <summary>
+    /// Lucas' converse of Fermat (a Pratt certificate, "Every prime has a succinct certificate",
+    /// SIAM J. Comput. 4 (1975), doi:10.1137/0204018, reference from memory): n is prime when some a has a^(n-1) = 1 mod n and
+    /// a^((n-1)/q) != 1 mod n for every prime q dividing n - 1. The factors of n - 1 come from coreutils
+    /// factor and are proved prime the same way, down to trial division below 2^32.
+    /// </summary>
+    private static bool ProvePrime(BigInteger n)
+    {
+        if (n < (BigInteger.One << 32)) return TrialDivisionPrime(n);
+        var qs = Factor([n - 1])[n - 1].Distinct().ToArray();
+        if (!qs.All(ProvePrime)) return false;
+        for (BigInteger a = 2; a < 1000; a++)
+            if (BigInteger.ModPow(a, n - 1, n).IsOne && qs.All(q => !BigInteger.ModPow(a, (n - 1) / q, n).IsOne))
+                return true;
+        return false;
+    }
+
+    [Theory]
+    [InlineData(31, true)]
+    [InlineData(61, true)]
+    [InlineData(89, true)]
+    [InlineData(59, false)]
+    [InlineData(67, false)]
+    public void MersenneNumbersAgreeWithTheLucasLehmerTest(int exponent, bool prime)
+    {
+        // Lucas-Lehmer (common practice): for an odd prime q, 2^q - 1 is prime iff s_(q-2) = 0 with
+        // s_0 = 4, s_(k+1) = s_k^2 - 2 mod 2^q - 1. The expected column is from memory (OEIS A000043).
+        var m = (BigInteger.One << exponent) - 1;
+        BigInteger s = 4;
+        for (int k = 0; k < exponent - 2; k++) s = (s * s - 2) % m;
+        Assert.Equal(prime, s.IsZero);
+        if (exponent < 64) Assert.Equal(prime, Primality.IsPrime((ulong)m));
     }
 
     [Fact]
@@ -111,7 +163,7 @@ public class PrimalityTests
     {
         // Strong pseudoprimes to base 2 (OEIS A001262, from memory) and the least strong pseudoprimes to
         // the first k prime bases (OEIS A014233, from memory; "Strong pseudoprimes to twelve prime bases",
-        // arXiv:1509.00864). Each is re-checked to really pass those Miller-Rabin rounds and to be composite.
+        // arXiv:1509.00864, reference from memory). Each is re-checked to really pass those Miller-Rabin rounds and to be composite.
         (BigInteger N, int[] Bases)[] cases =
         [
             (2047, [2]), (3277, [2]), (4033, [2]), (4681, [2]), (8321, [2]), (15841, [2]), (29341, [2]),
@@ -138,12 +190,6 @@ public class PrimalityTests
     {
         var rng = new Random(9001);
         // Primes near 2^31..2^32 found by trial division (independent of the code under test).
-        static bool TrialDivisionPrime(ulong n)
-        {
-            if (n < 2) return false;
-            for (ulong d = 2; d * d <= n; d++) if (n % d == 0) return false;
-            return true;
-        }
         ulong RandomPrime32()
         {
             while (true)
