@@ -22,6 +22,8 @@ public static class CliApp
         var root = new RootCommand("flowcert: exact flows for measurement-based quantum computing on weighted graph states");
         root.Subcommands.Add(SolveCommand.Create(stdout));
         root.Subcommands.Add(DemoCommand.Create(stdout));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout));
+        root.Subcommands.Add(SimulateCommand.Create(stdout, stderr));
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {
