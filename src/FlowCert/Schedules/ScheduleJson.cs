@@ -20,8 +20,9 @@ public static class ScheduleJson
         var text = new StringWriter { NewLine = "\n" };
         using (var w = new JsonTextWriter(text) { Formatting = Formatting.Indented, Indentation = 2 })
         {
-            void Names(IEnumerable<int> nodes) { w.WriteStartArray(); foreach (var v in nodes) w.WriteValue(g.Names[v]); w.WriteEndArray(); }
-            void Form(LinearForm f) { w.WriteStartObject(); foreach (var (v, c) in f.Terms) { w.WritePropertyName(g.Names[v]); w.WriteValue(c); } w.WriteEndObject(); }
+            // Name lists, forms and correction entries are written compactly, one to a line.
+            void Names(IEnumerable<int> nodes) => w.WriteRawValue(JsonConvert.SerializeObject(nodes.Select(v => g.Names[v]).ToArray()));
+            Dictionary<string, string> Terms(LinearForm f) => f.Terms.ToDictionary(t => g.Names[t.Node], t => t.Coefficient);
 
             w.WriteStartObject();
             w.WritePropertyName("format"); w.WriteValue(Format);
@@ -35,31 +36,17 @@ public static class ScheduleJson
             w.WritePropertyName("corrections");
             w.WriteStartArray();
             foreach (var c in s.Corrections)
-            {
-                w.WriteStartObject();
-                w.WritePropertyName("outcome"); w.WriteValue(g.Names[c.Source]);
-                w.WritePropertyName("node"); w.WriteValue(g.Names[c.Target]);
-                w.WritePropertyName("x"); w.WriteValue(c.X);
-                w.WritePropertyName("z"); w.WriteValue(c.Z);
-                w.WriteEndObject();
-            }
+                w.WriteRawValue(JsonConvert.SerializeObject(new { outcome = g.Names[c.Source], node = g.Names[c.Target], x = c.X, z = c.Z }));
             w.WriteEndArray();
             w.WritePropertyName("frames");
             w.WriteStartArray();
             foreach (var fr in s.Frames)
-            {
-                w.WriteStartObject();
-                w.WritePropertyName("node"); w.WriteValue(g.Names[fr.Node]);
-                w.WritePropertyName("round"); if (fr.IsOutput) w.WriteNull(); else w.WriteValue(fr.Round);
-                w.WritePropertyName("x"); Form(fr.X);
-                w.WritePropertyName("z"); Form(fr.Z);
-                w.WriteEndObject();
-            }
+                w.WriteRawValue(JsonConvert.SerializeObject(new { node = g.Names[fr.Node], round = fr.IsOutput ? (int?)null : fr.Round, x = Terms(fr.X), z = Terms(fr.Z) }));
             w.WriteEndArray();
             w.WritePropertyName("statistics");
             w.WriteStartObject();
             w.WritePropertyName("depth"); w.WriteValue(st.Depth);
-            w.WritePropertyName("nodesPerRound"); w.WriteStartArray(); foreach (var k in st.NodesPerRound) w.WriteValue(k); w.WriteEndArray();
+            w.WritePropertyName("nodesPerRound"); w.WriteRawValue(JsonConvert.SerializeObject(st.NodesPerRound));
             w.WritePropertyName("maxAngleDependencies"); w.WriteValue(st.MaxAngleDependencies);
             w.WritePropertyName("maxReadoutDependencies"); w.WriteValue(st.MaxReadoutDependencies);
             w.WritePropertyName("maxOutputDependencies"); w.WriteValue(st.MaxOutputDependencies);

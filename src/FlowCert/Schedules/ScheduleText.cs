@@ -32,7 +32,7 @@ public static class ScheduleText
         string When(NodeFrame fr) => fr.IsOutput ? "output" : $"round {fr.Round}";
 
         Line($"feed-forward schedule: field {s.Field.Name}, {CertificateWriter.KindName(s.Kind)} flow, depth {st.Depth}; " +
-             $"{g.NodeCount} nodes ({g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured)");
+             $"{g.NodeCount} nodes: {g.Inputs.Count} input(s), {g.Outputs.Count} output(s), {g.NodeCount - g.Outputs.Count} measured");
         Line($"m_v = outcome of v re-read through its frame (raw outcome - b_v); all arithmetic exact, in {s.Field.Name}");
         Line();
         Line("rounds (round 1 is measured first; nodes of one round in parallel)");
