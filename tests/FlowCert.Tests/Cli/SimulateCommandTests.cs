@@ -14,6 +14,15 @@ public class SimulateCommandTests
     }
 
     [Fact]
+    public void TheSameSeedPrintsTheSameReport()
+    {
+        string[] args = ["simulate", Corpus("loop-wire.ograph"), "--cert", Corpus("loop-wire.F5.general.json"), "--branches", "20", "--seed", "12"];
+        var first = Run(args);
+        Assert.Equal(0, first.Code);
+        Assert.Equal(first.Out, Run(args).Out);
+    }
+
+    [Fact]
     public void SampledBranchesAreNamedAsSuch()
     {
         var (code, o, _) = Run("simulate", Corpus("qutrit-patch.ograph"), "--cert", Corpus("qutrit-patch.F3.causal.json"), "--branches", "5", "--seed", "9");

@@ -18,6 +18,8 @@ public class RandomDeterminismTests
     {
         var corpus = RandomFlowCorpus.Certificates(p, count, seed);
         Assert.Equal(count, corpus.Count);
+        Assert.Contains(corpus, c => c.Result.Kind == FlowCert.Flows.FlowKind.General);
+        Assert.Contains(corpus, c => c.Result.Kind == FlowCert.Flows.FlowKind.Causal);
         int exhaustive = 0;
         for (int i = 0; i < corpus.Count; i++)
         {
