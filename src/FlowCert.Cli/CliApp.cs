@@ -1,7 +1,10 @@
 using System.CommandLine;
 using FlowCert.Algebra;
 using FlowCert.Flows;
+using FlowCert.Certificates;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Families;
+using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
 
@@ -24,6 +27,9 @@ public static class CliApp
         root.Subcommands.Add(DemoCommand.Create(stdout));
         root.Subcommands.Add(ScheduleCommand.Create(stdout));
         root.Subcommands.Add(SimulateCommand.Create(stdout, stderr));
+        root.Subcommands.Add(GenerateCommand.Create(stdout));
+        root.Subcommands.Add(ConvertCommand.Create(stdout));
+        root.Subcommands.Add(DrawCommand.Create(stdout));
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {
@@ -35,7 +41,8 @@ public static class CliApp
         {
             return parsed.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
         }
-        catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException)
+        catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException
+            or GraphFileException or FamilyParameterException or CertificateFormatException)
         {
             stderr.WriteLine($"flowcert: {e.Message}");
             return ExitCode.BadInput;
