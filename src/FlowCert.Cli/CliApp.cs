@@ -25,6 +25,8 @@ public static class CliApp
         var root = new RootCommand("flowcert: exact flows for measurement-based quantum computing on weighted graph states");
         root.Subcommands.Add(SolveCommand.Create(stdout));
         root.Subcommands.Add(DemoCommand.Create(stdout));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout));
+        root.Subcommands.Add(SimulateCommand.Create(stdout, stderr));
         root.Subcommands.Add(GenerateCommand.Create(stdout));
         root.Subcommands.Add(ConvertCommand.Create(stdout));
         root.Subcommands.Add(DrawCommand.Create(stdout));
