@@ -279,4 +279,26 @@ public class SolveCommandTests
         Assert.Equal(2 + 2 * 3 * 2 * 2, w.Listing().Length);
         Assert.DoesNotContain(w.Listing(), f => f.EndsWith(".tmp"));
     }
+
+    [Fact]
+    public void AnOutputPathThatIsAFolderIsRefusedNamingIt()
+    {
+        using var w = new Workspace();
+        var graph = w.Write("wire.ograph", Designs.Wire);
+        Directory.CreateDirectory(w.PathOf("taken.json"));
+        var run = Flowcert.InProcess("solve", graph, "--out", w.PathOf("taken.json"));
+        Assert.True(run.ExitCode == 2, run.ToString());
+        Assert.Contains($"cannot write {w.PathOf("taken.json")}: it is a folder", run.Stderr);
+    }
+
+    [Fact]
+    public void JsonListsTheEdgesThatVanishInFp()
+    {
+        using var w = new Workspace();
+        var graph = w.Write("several.ograph", "input a\noutput e\nedge a b 0.75\nedge b c 3\nedge c d 1\nedge d e 6/5\n");
+        var run = Flowcert.InProcess("solve", graph, "--field", "3", "--json");
+        var vanished = JObject.Parse(run.Stdout)["vanishedEdges"]!.Select(e => string.Join(" ", e.Values<string>())).ToArray();
+        // 3/4, 3 and 6/5 have numerators divisible by 3 (flows.md section 1); c - d stays.
+        Assert.Equal(["a b 3/4", "b c 3", "d e 6/5"], vanished);
+    }
 }

@@ -164,4 +164,14 @@ public class OgraphReaderErrorTests
         }
         finally { dir.Delete(true); }
     }
+
+    [Theory]
+    [InlineData("1234567890")]
+    [InlineData("1.1234567890")]
+    public void ACoordinateWithMoreThanNineDigitsOnASideIsRefusedWithItsColumn(string coordinate)
+    {
+        var e = Assert.Throws<FlowCert.Graphs.GraphFormatException>(() => FlowCert.Graphs.OgraphReader.Parse($"edge a b\nat a 0 {coordinate}\n", "hint.ograph"));
+        Assert.Equal((2, 8), (e.Line, e.Column));
+        Assert.Contains("at most 9 digits", e.Message);
+    }
 }
