@@ -25,6 +25,8 @@ public static class CliApp
         var root = new RootCommand("flowcert: exact flows for measurement-based quantum computing on weighted graph states");
         root.Subcommands.Add(SolveCommand.Create(stdout));
         root.Subcommands.Add(DemoCommand.Create(stdout));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout));
+        root.Subcommands.Add(SimulateCommand.Create(stdout, stderr));
         root.Subcommands.Add(GenerateCommand.Create(stdout));
         root.Subcommands.Add(ConvertCommand.Create(stdout));
         root.Subcommands.Add(DrawCommand.Create(stdout));
@@ -55,6 +57,12 @@ public static class CliApp
             stderr.WriteLine($"flowcert: internal error: {e}");
             return ExitCode.Internal;
         }
+    }
+
+    /// <summary>Refuses an empty path (the file APIs would throw an ArgumentException, reported as an internal error).</summary>
+    public static void RequirePath(string path, string what)
+    {
+        if (string.IsNullOrEmpty(path)) throw new UserInputException($"{what} is empty: give a file or folder name.");
     }
 
     /// <summary>Parses --flow.</summary>

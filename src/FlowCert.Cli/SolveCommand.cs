@@ -29,6 +29,8 @@ public static class SolveCommand
     public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout,
         string? inputs = null, string? outputs = null)
     {
+        CliApp.RequirePath(graphPath, "the graph file");
+        if (outPath is not null) CliApp.RequirePath(outPath, "--out");
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
@@ -58,7 +60,15 @@ public static class SolveCommand
         w.WritePropertyName("nodes"); w.WriteValue(r.Graph.NodeCount);
         w.WritePropertyName("edges"); w.WriteValue(r.Graph.Edges.Count);
         w.WritePropertyName("measured"); w.WriteValue(r.Graph.NodeCount - r.Graph.Outputs.Count);
-        w.WritePropertyName("vanishedEdges"); w.WriteValue(r.VanishedEdges.Count);
+        w.WritePropertyName("vanishedEdges");
+        w.WriteStartArray();
+        foreach (var e in r.VanishedEdges)
+        {
+            w.WriteStartArray();
+            w.WriteValue(r.Graph.Names[e.U]); w.WriteValue(r.Graph.Names[e.V]); w.WriteValue(e.Weight.ToString());
+            w.WriteEndArray();
+        }
+        w.WriteEndArray();
         w.WritePropertyName("blocked"); if (r.Obstruction is null) w.WriteNull(); else w.WriteValue(r.Obstruction.Nodes.Count);
         w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(r.Graph));
         w.WritePropertyName("seconds");
