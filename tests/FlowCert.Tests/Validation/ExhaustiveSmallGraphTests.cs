@@ -21,7 +21,7 @@ public sealed class ExhaustiveSmallGraphTests(ITestOutputHelper output)
     private static readonly string[] RandomWeights = ["1", "-1", "2", "3", "4", "-1/5", "5/7", "-7"];
 
     private static List<Graph6Reader.SimpleGraph> Graphs(int order)
-        => order == 0 ? [Graph6Reader.ParseLine("?")] : Graph6Reader.ParseAll(ExternalProgram.Run("nauty-geng", "nauty", ["-q", order.ToString()]));
+        => order == 0 ? [Graph6Reader.ParseLine("?")] : Graph6Reader.ParseAll(PipedProgram.Run("nauty-geng", "nauty", ["-q", order.ToString()]));
 
     private static OpenGraph Build(Graph6Reader.SimpleGraph g, int inputs, int outputs, string[] weights)
     {

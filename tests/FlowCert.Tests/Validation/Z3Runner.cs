@@ -15,7 +15,7 @@ public static class Z3Runner
         var script = new System.Text.StringBuilder();
         foreach (var p in problems) script.Append(p).Append("(check-sat)\n(reset)\n");
         var hardLimit = secondsPerQuestion * problems.Count + 10;
-        var text = ExternalProgram.Run("z3", "z3", ["-smt2", "-in", "smt.arith.solver=2", $"-t:{secondsPerQuestion * 1000}", $"-T:{hardLimit}"], script.ToString());
+        var text = PipedProgram.Run("z3", "z3", ["-smt2", "-in", "smt.arith.solver=2", $"-t:{secondsPerQuestion * 1000}", $"-T:{hardLimit}"], script.ToString());
         var answers = text.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
         if (answers.Length != problems.Count || answers.Any(a => a is not ("sat" or "unsat" or "unknown")))
             throw new Xunit.Sdk.XunitException($"unexpected z3 output for {problems.Count} questions:\n{text}");

@@ -4,10 +4,11 @@ using System.Diagnostics;
 namespace FlowCert.Tests.Validation;
 
 /// <summary>
-/// Runs an external program by name (z3, nauty-geng). A missing program fails the test with a message
-/// naming the Debian package that provides it; it never passes silently.
+/// Runs an external program by name (z3, nauty-geng, nauty-showg) and feeds it standard input: the
+/// piped sibling of <see cref="FlowCert.Tests.ExternalProgram"/>. A missing program fails the test with a
+/// message naming the Debian package that provides it; it never passes silently.
 /// </summary>
-public static class ExternalProgram
+public static class PipedProgram
 {
     /// <summary>Runs the program with the arguments and standard input; returns standard output. Fails on a non-zero exit.</summary>
     public static string Run(string program, string debianPackage, IEnumerable<string> arguments, string? standardInput = null)
