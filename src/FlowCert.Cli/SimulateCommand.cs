@@ -41,21 +41,21 @@ public static class SimulateCommand
         {
             pattern = QuditPattern.FromFlow(result, dim, seed);
             foreach (var problem in pattern.Violations) stderr.WriteLine($"flowcert: warning: {certPath}: {problem}");
-            report = PatternSimulator.Run(pattern, selection);
+            report = OutcomeTreeSimulator.Run(pattern, selection);
         }
         catch (Exception e) when (e is SimulationException or ScheduleException) { throw new UserInputException($"{certPath}: {e.Message}"); }
         Write(o, graphPath, certPath, result.Field.Name, pattern, report, selection, seed);
         return report.Deterministic ? ExitCode.Flow : ExitCode.NoFlow;
     }
 
-    private static BranchSelection ParseBranches(string text, ulong seed)
+    private static OutcomeBranches ParseBranches(string text, ulong seed)
     {
-        if (text == "all") return BranchSelection.All;
-        if (int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var k)) return BranchSelection.Sample(k, seed);
+        if (text == "all") return OutcomeBranches.All;
+        if (int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var k)) return OutcomeBranches.Sample(k, seed);
         throw new UserInputException($"'{text}' is not a branch selection: write all, or a number K of random branches.");
     }
 
-    private static void Write(TextWriter o, string graphPath, string certPath, string field, QuditPattern pattern, DeterminismReport r, BranchSelection selection, ulong seed)
+    private static void Write(TextWriter o, string graphPath, string certPath, string field, QuditPattern pattern, DeterminismReport r, OutcomeBranches selection, ulong seed)
     {
         static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;

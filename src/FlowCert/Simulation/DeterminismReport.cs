@@ -26,7 +26,7 @@ public sealed record DeterminismReport(
 }
 
 /// <summary>Accumulates branches against the first one (the all-zero branch) into a <see cref="DeterminismReport"/>.</summary>
-internal sealed class DeterminismComparison(QuditPattern pattern, BranchSelection selection)
+internal sealed class DeterminismComparison(QuditPattern pattern, OutcomeBranches selection)
 {
     private Matrix<Complex>? reference;
     private readonly Vector input = Vector.Build.DenseOfArray(pattern.InputState);

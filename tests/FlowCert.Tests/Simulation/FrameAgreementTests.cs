@@ -28,7 +28,7 @@ public class FrameAgreementTests
         }
         var framed = schedule.Frames.Select(fr => fr.Node).ToHashSet();
         int branches = 0;
-        PatternSimulator.Run(pattern, SimulationCases.Budget(pattern, seed), branch =>
+        OutcomeTreeSimulator.Run(pattern, SimulationCases.Budget(pattern, seed), branch =>
         {
             branches++;
             foreach (var fr in schedule.Frames)

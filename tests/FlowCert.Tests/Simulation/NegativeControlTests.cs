@@ -43,7 +43,7 @@ public class NegativeControlTests
                 .Select((c, i) => (c, QuditPattern.FromFlow(c, null, (ulong)i)))
                 .First(x => x.Item2.Violations.Count > 0);
             Assert.Throws<ScheduleException>(() => ScheduleBuilder.Build(corrupted));
-            var report = PatternSimulator.Run(pattern, SimulationCases.Budget(pattern, 11));
+            var report = OutcomeTreeSimulator.Run(pattern, SimulationCases.Budget(pattern, 11));
             Assert.False(report.Deterministic, $"{name}: corrupted ({string.Join("; ", pattern.Violations)}) yet deviation only {report.MaxDeviation}");
         }
     }
@@ -55,6 +55,6 @@ public class NegativeControlTests
         var corrupted = Corruptions(result).First();
         var pattern = QuditPattern.FromFlow(corrupted, null, 1);
         Assert.Contains(pattern.Violations, v => v.Contains("condition 2"));
-        Assert.False(PatternSimulator.Run(pattern, BranchSelection.All).Deterministic);
+        Assert.False(OutcomeTreeSimulator.Run(pattern, OutcomeBranches.All).Deterministic);
     }
 }

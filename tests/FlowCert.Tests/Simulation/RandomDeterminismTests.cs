@@ -26,7 +26,7 @@ public class RandomDeterminismTests
             var (name, result) = corpus[i];
             var pattern = QuditPattern.FromFlow(result, null, (ulong)i);
             Assert.Empty(pattern.Violations);
-            var report = PatternSimulator.Run(pattern, SimulationCases.Budget(pattern, (ulong)i));
+            var report = OutcomeTreeSimulator.Run(pattern, SimulationCases.Budget(pattern, (ulong)i));
             Assert.True(report.MaxDeviation <= 1e-9, $"{name}: deviation {report.MaxDeviation}");
             Assert.True(report.RelativeSpread <= 1e-9, $"{name}: probabilities from {report.MinProbability} to {report.MaxProbability}");
             Assert.True(report.Deterministic, name);

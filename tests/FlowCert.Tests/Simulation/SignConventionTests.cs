@@ -36,10 +36,10 @@ public class SignConventionTests
         var schedule = ScheduleBuilder.Build(result);
         var pattern = QuditPattern.FromFlow(result, null, seed);
         var branches = SimulationCases.Budget(pattern, seed);
-        Assert.True(PatternSimulator.Run(pattern, branches).Deterministic, $"{name}: the correct conventions must be deterministic");
+        Assert.True(OutcomeTreeSimulator.Run(pattern, branches).Deterministic, $"{name}: the correct conventions must be deterministic");
         foreach (var fault in SignFaults.Append(FrameFault.SkipAngleAdaptation))
         {
-            var report = PatternSimulator.Run(pattern, branches, fault);
+            var report = OutcomeTreeSimulator.Run(pattern, branches, fault);
             bool used = Uses(fault, schedule) && (pattern.Dimension > 2 || fault == FrameFault.SkipAngleAdaptation);
             if (used) sensitive++;
             Assert.True(used != report.Deterministic,
@@ -80,7 +80,7 @@ public class SignConventionTests
         var pattern = QuditPattern.FromFlow(result, null, 3);
         Assert.True(SimulationCases.AdaptsSomeAngle(ScheduleBuilder.Build(result)));
         foreach (var fault in SignFaults)
-            Assert.True(PatternSimulator.Run(pattern, BranchSelection.All, fault).Deterministic, fault.ToString());
-        Assert.False(PatternSimulator.Run(pattern, BranchSelection.All, FrameFault.SkipAngleAdaptation).Deterministic);
+            Assert.True(OutcomeTreeSimulator.Run(pattern, OutcomeBranches.All, fault).Deterministic, fault.ToString());
+        Assert.False(OutcomeTreeSimulator.Run(pattern, OutcomeBranches.All, FrameFault.SkipAngleAdaptation).Deterministic);
     }
 }

@@ -12,8 +12,8 @@ public static class SimulationCases
         => CertificateReader.ReadFile(Path.Combine(FlowCert.Tests.Certificates.CorpusTests.RepositoryRoot(), "certificates", file));
 
     /// <summary>Every branch when there are at most 729, else 40 sampled ones plus the all-zero one.</summary>
-    public static BranchSelection Budget(QuditPattern pattern, ulong seed)
-        => Math.Pow(pattern.Dimension, pattern.Order.Count) <= 729 ? BranchSelection.All : BranchSelection.Sample(40, seed);
+    public static OutcomeBranches Budget(QuditPattern pattern, ulong seed)
+        => Math.Pow(pattern.Dimension, pattern.Order.Count) <= 729 ? OutcomeBranches.All : OutcomeBranches.Sample(40, seed);
 
     /// <summary>Some measured node has a non-zero X-frame: its angle must be adapted.</summary>
     public static bool AdaptsSomeAngle(FeedForwardSchedule s) => s.Frames.Any(f => !f.IsOutput && !f.X.IsZero);

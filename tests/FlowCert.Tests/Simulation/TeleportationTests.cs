@@ -21,9 +21,9 @@ public class TeleportationTests
     private static Matrix<Complex> Simulated(int p, Complex[] diagonal, int s)
     {
         int a = Wire.IndexOf("a"), b = Wire.IndexOf("b");
-        var register = GraphState.Prepare(Wire, p).Project(a, QuditOperators.OutcomeBra(diagonal, s));
+        var register = GraphStateVector.Prepare(Wire, p).Project(a, QuditOperators.OutcomeBra(diagonal, s));
         // The reference holds 1/sqrt(p) of every input basis state: scale back to the map itself.
-        return register.ToMatrix([b], [GraphState.ReferenceLabel(a)]) * new Complex(Math.Sqrt(p), 0);
+        return register.ToMatrix([b], [GraphStateVector.ReferenceLabel(a)]) * new Complex(Math.Sqrt(p), 0);
     }
 
     [Theory]

@@ -10,7 +10,7 @@ namespace FlowCert.Simulation;
 /// prod CZ^A[u][v] with the weights reduced mod p. Reading the reference as the column index of the
 /// output map turns one simulation into the whole input-to-output matrix.
 /// </summary>
-public static class GraphState
+public static class GraphStateVector
 {
     /// <summary>The reference qudit's label for input node v.</summary>
     public static int ReferenceLabel(int input) => -1 - input;

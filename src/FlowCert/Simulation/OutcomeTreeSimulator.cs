@@ -10,13 +10,13 @@ namespace FlowCert.Simulation;
 /// the other nodes, and finally applies (X^a Z^b)^-1 to the outputs. Branches share their common prefix
 /// (depth-first), so enumerating all p^|M| of them costs about |M| times one preparation.
 /// </summary>
-public static class PatternSimulator
+public static class OutcomeTreeSimulator
 {
     /// <summary>Simulates the selected branches, the all-zero branch first, and compares them.</summary>
-    public static DeterminismReport Run(QuditPattern pattern, BranchSelection branches, Action<BranchRecord>? observer = null)
+    public static DeterminismReport Run(QuditPattern pattern, OutcomeBranches branches, Action<BranchRecord>? observer = null)
         => Run(pattern, branches, FrameFault.None, observer);
 
-    internal static DeterminismReport Run(QuditPattern pattern, BranchSelection branches, FrameFault faults, Action<BranchRecord>? observer = null)
+    internal static DeterminismReport Run(QuditPattern pattern, OutcomeBranches branches, FrameFault faults, Action<BranchRecord>? observer = null)
     {
         var comparison = new DeterminismComparison(pattern, branches);
         Explore(pattern, branches, faults, record => { comparison.Add(record); observer?.Invoke(record); });
@@ -24,19 +24,19 @@ public static class PatternSimulator
     }
 
     /// <summary>Visits the selected branches depth-first, outcome 0 first at every level.</summary>
-    internal static void Explore(QuditPattern pattern, BranchSelection branches, FrameFault faults, Action<BranchRecord> visit)
+    internal static void Explore(QuditPattern pattern, OutcomeBranches branches, FrameFault faults, Action<BranchRecord> visit)
     {
         var g = pattern.Graph;
         int n = g.NodeCount, depth = pattern.Order.Count;
         List<int[]>? sample = null;
         if (!branches.IsExhaustive) sample = Sample(pattern, branches);
-        else if (Math.Pow(pattern.Dimension, depth) > BranchSelection.MaxExhaustive)
+        else if (Math.Pow(pattern.Dimension, depth) > OutcomeBranches.MaxExhaustive)
             throw new SimulationException($"--branches all would enumerate {pattern.Dimension}^{depth} outcome strings, more than 2^20: sample some with --branches K");
         var state = new Walk(pattern, faults, visit, new int[n], new int[n], new int[n], new int[n], new int[n], new int[n]);
-        state.Step(0, GraphState.Prepare(g, pattern.Dimension), sample);
+        state.Step(0, GraphStateVector.Prepare(g, pattern.Dimension), sample);
     }
 
-    private static List<int[]> Sample(QuditPattern pattern, BranchSelection branches)
+    private static List<int[]> Sample(QuditPattern pattern, OutcomeBranches branches)
     {
         var random = new SeededRandom(branches.Seed ^ 0x5EEDB4A7C4E5UL);
         var strings = new List<int[]> { new int[pattern.Order.Count] };
@@ -89,7 +89,7 @@ public static class PatternSimulator
                 register.Apply(o, undo);
             }
             double scale = Math.Sqrt(Math.Pow(p, g.Inputs.Count));
-            var map = register.ToMatrix(outputs, g.SortedInputs.Select(GraphState.ReferenceLabel).ToArray()) * new Complex(scale, 0);
+            var map = register.ToMatrix(outputs, g.SortedInputs.Select(GraphStateVector.ReferenceLabel).ToArray()) * new Complex(scale, 0);
             Visit(new BranchRecord((int[])Raw.Clone(), (int[])Outcome.Clone(), (int[])UsedA.Clone(), (int[])UsedB.Clone(), map));
         }
     }
