@@ -12,8 +12,7 @@ internal static class RandomGraphs
     internal static string Name(int v) => $"v{v}";
 
     /// <summary>
-    /// G(n, q), the Erdős–Rényi model with independent edges ("Random graphs", Annals of Mathematical
-    /// Statistics 30, 1959, doi:10.1214/aoms/1177706098, identifier from memory): every pair {u, v},
+    /// The binomial random graph G(n, q), with independent edges (common practice): every pair {u, v},
     /// u &lt; v, taken in order of v then u, is an edge with probability exactly q.
     /// </summary>
     public static GraphDraft Binomial(int n, Rational q, SplitMix64 rng)
