@@ -45,7 +45,7 @@ public sealed class QuditPattern
 
     /// <summary>
     /// Compiles a flow result for dimension p (null: the field's prime). Throws <see cref="SimulationException"/>
-    /// over Q, when p differs from the field's prime, or beyond <see cref="MaxAmplitudes"/>;
+    /// over Q, over a prime above 2^31 - 1, when p differs from the field's prime, or beyond <see cref="MaxAmplitudes"/>;
     /// <see cref="ScheduleException"/> for a noflow or malformed certificate.
     /// </summary>
     public static QuditPattern FromFlow(FlowResult r, int? dimension, ulong seed)
@@ -54,7 +54,10 @@ public sealed class QuditPattern
             throw new SimulationException("the certificate is over Q, the continuous-variable case: its modes have an infinite-dimensional " +
                 "state space, which no state vector can hold. Solve the graph over a prime instead (for example --field 3) and simulate that certificate.");
         if (!r.HasFlow) throw new ScheduleException("the certificate says no flow exists (verdict noflow): there is no pattern to simulate");
-        int p = checked((int)r.Field.Prime);
+        if (r.Field.Prime > int.MaxValue)
+            throw new SimulationException($"the certificate is over {r.Field.Name}: qudits of a dimension above 2^31 - 1 are beyond the simulator " +
+                $"(its state holds at most 2^22 = {MaxAmplitudes} amplitudes). Solve the graph over a small prime (for example --field 3) and simulate that certificate.");
+        int p = (int)r.Field.Prime;
         if (dimension is { } d && d != p)
             throw new SimulationException($"--dim {d} does not match the certificate's field {r.Field.Name}: its corrections hold mod {p} only. " +
                 $"Use --dim {p}, or solve the graph over {d} and simulate that certificate.");

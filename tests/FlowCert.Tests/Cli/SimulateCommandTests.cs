@@ -81,4 +81,19 @@ public class SimulateCommandTests
         }
         finally { Directory.Delete(dir, true); }
     }
+
+    [Fact]
+    public void ACertificateOverAPrimeBeyondTheIntegerRangeIsBadInputNotACrash()
+    {
+        using var w = new Workspace();
+        var graph = w.Write("wire.ograph", "input a\noutput b\nedge a b\n");
+        var cert = w.PathOf("wire.F2147483659.json");
+        Assert.Equal(0, Run("solve", graph, "--field", "2147483659", "--out", cert).Code);
+        var (code, o, e) = Run("simulate", graph, "--cert", cert);
+        Assert.Equal(2, code);
+        Assert.Equal("", o);
+        Assert.Contains("F2147483659", e);
+        Assert.DoesNotContain("internal error", e);
+        Assert.Single(e.TrimEnd('\n').Split('\n'));
+    }
 }
