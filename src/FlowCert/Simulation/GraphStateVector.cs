@@ -28,9 +28,10 @@ public static class GraphStateVector
         var labels = inputs.Select(ReferenceLabel).Concat(Enumerable.Range(0, n)).ToArray();
         long size = (long)Math.Pow(p, n + r);
         var amplitudes = new Complex[size];
+        // Reference qudits take the lowest positions, graph node v the position r + v. With no nodes the
+        // state is the single amplitude 1 (the empty product).
         var stride = new long[n];
-        stride[0] = (long)Math.Pow(p, r);
-        for (int v = 1; v < n; v++) stride[v] = stride[v - 1] * p;
+        for (int v = 0; v < n; v++) stride[v] = v == 0 ? (long)Math.Pow(p, r) : stride[v - 1] * p;
         var inputStride = inputs.Select((_, i) => (long)Math.Pow(p, i)).ToArray();
         double norm = 1.0 / Math.Sqrt(Math.Pow(p, n));
         var phases = Enumerable.Range(0, p).Select(k => QuditOperators.RootOfUnity(p, k) * norm).ToArray();

@@ -96,4 +96,17 @@ public class SimulateCommandTests
         Assert.DoesNotContain("internal error", e);
         Assert.Single(e.TrimEnd('\n').Split('\n'));
     }
+
+    [Fact]
+    public void AGraphWithoutNodesIsTheTrivialDeterministicPattern()
+    {
+        using var w = new Workspace();
+        var graph = w.Write("empty.ograph", "# no nodes at all\n");
+        var cert = w.PathOf("empty.F3.json");
+        Assert.Equal(0, Run("solve", graph, "--field", "3", "--out", cert).Code);
+        var (code, o, e) = Run("simulate", graph, "--cert", cert);
+        Assert.True(code == 0, e);
+        Assert.Contains("branches     1 of 1", o);
+        Assert.Contains("verdict      deterministic", o);
+    }
 }
