@@ -3,35 +3,40 @@ using System.Globalization;
 using FlowCert.Algebra;
 using FlowCert.Certificates;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
 using FlowCert.Schedules;
 using FlowCert.Simulation;
 
 namespace FlowCert.Cli;
 
 /// <summary>
-/// <c>flowcert simulate GRAPH --cert CERT [--dim P] [--seed N] [--branches all|K]</c>: runs the certificate's
+/// <c>flowcert simulate GRAPH --cert CERT [--inputs NAMES] [--outputs NAMES] [--dim P] [--seed N] [--branches all|K]</c>: runs the certificate's
 /// pattern on a state vector and says whether every outcome branch implements the same map.
 /// </summary>
 public static class SimulateCommand
 {
     public static Command Create(TextWriter stdout, TextWriter stderr)
     {
-        var graph = new Argument<string>("GRAPH") { Description = "the open graph (.ograph) the certificate is about" };
+        var graph = new Argument<string>("GRAPH") { Description = "the open graph the certificate is about: .ograph, .g6, .s6, .mtx or .json" };
+        var inputs = ConvertCommand.InputsOption();
+        var outputs = ConvertCommand.OutputsOption();
         var cert = new Option<string>("--cert") { Description = "a flow certificate over F_p (JSON)", Required = true };
         var dim = new Option<int?>("--dim") { Description = "qudit dimension; must equal the certificate's prime (the default)" };
         var seed = new Option<ulong>("--seed") { Description = "seed of the random angles, input state and sampled branches", DefaultValueFactory = _ => 1 };
         var branches = new Option<string>("--branches") { Description = "all (every outcome string) or K (K random ones plus the all-zero one)", DefaultValueFactory = _ => "all" };
-        var cmd = new Command("simulate", "Simulate the pattern of a flow certificate over qudits; exit 0 deterministic, 1 outcome-dependent, 2 bad input") { graph, cert, dim, seed, branches };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(cert)!, p.GetValue(dim), p.GetValue(seed), p.GetValue(branches)!, stdout, stderr));
+        var cmd = new Command("simulate", "Simulate the pattern of a flow certificate over qudits; exit 0 deterministic, 1 outcome-dependent, 2 bad input") { graph, cert, inputs, outputs, dim, seed, branches };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(cert)!, p.GetValue(dim), p.GetValue(seed), p.GetValue(branches)!, stdout, stderr,
+            p.GetValue(inputs), p.GetValue(outputs)));
         return cmd;
     }
 
-    public static int Execute(string graphPath, string certPath, int? dim, ulong seed, string branchText, TextWriter o, TextWriter stderr)
+    public static int Execute(string graphPath, string certPath, int? dim, ulong seed, string branchText, TextWriter o, TextWriter stderr,
+        string? inputs = null, string? outputs = null)
     {
         var selection = ParseBranches(branchText, seed);
         if (dim is { } d && (d < 2 || !Primality.IsPrime((ulong)d)))
             throw new UserInputException($"--dim {d} is not a prime: qudit flows are defined for prime dimensions (see the README section \"Composite dimensions\").");
-        var graph = OgraphReader.ReadFile(graphPath);
+        var graph = GraphFiles.Read(graphPath, inputs, outputs);
         var result = ScheduleCommand.Read(certPath);
         if (CanonicalForm.Sha256(graph) != CanonicalForm.Sha256(result.Graph))
             throw new UserInputException($"{graphPath} and {certPath} describe different graphs (canonical SHA-256 {CanonicalForm.Sha256(graph)[..12]}... and {CanonicalForm.Sha256(result.Graph)[..12]}...)");

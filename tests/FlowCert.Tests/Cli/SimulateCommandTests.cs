@@ -109,4 +109,20 @@ public class SimulateCommandTests
         Assert.Contains("branches     1 of 1", o);
         Assert.Contains("verdict      deterministic", o);
     }
+
+    [Fact]
+    public void TheGraphIsReadInAnyGraphFormatWithInputsAndOutputsBesideIt()
+    {
+        using var w = new Workspace();
+        var graph = w.Write("path.g6", "Bg\n"); // graph6 of the path v0 - v1 - v2
+        var cert = w.PathOf("path.F3.json");
+        Assert.Equal(0, Run("solve", graph, "--field", "3", "--inputs", "v0", "--outputs", "v2", "--out", cert).Code);
+        var (code, o, e) = Run("simulate", graph, "--inputs", "v0", "--outputs", "v2", "--cert", cert);
+        Assert.True(code == 0, e);
+        Assert.Contains("verdict      deterministic", o);
+        // Without the terminals it is another graph than the certificate's.
+        var other = Run("simulate", graph, "--cert", cert);
+        Assert.Equal(2, other.Code);
+        Assert.Contains("different graphs", other.Err);
+    }
 }
