@@ -56,8 +56,11 @@ public static class SimulateCommand
     private static OutcomeBranches ParseBranches(string text, ulong seed)
     {
         if (text == "all") return OutcomeBranches.All;
-        if (int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var k)) return OutcomeBranches.Sample(k, seed);
-        throw new UserInputException($"'{text}' is not a branch selection: write all, or a number K of random branches.");
+        if (text.Length == 0 || !text.All(char.IsAsciiDigit))
+            throw new UserInputException($"'{text}' is not a branch selection: write all, or a number K of random branches.");
+        if (!int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var k) || k > OutcomeBranches.MaxExhaustive)
+            throw new UserInputException($"--branches {text} is too many: sample at most {OutcomeBranches.MaxExhaustive} branches (2^20, the most 'all' enumerates).");
+        return OutcomeBranches.Sample(k, seed);
     }
 
     private static void Write(TextWriter o, string graphPath, string certPath, string field, QuditPattern pattern, DeterminismReport r, OutcomeBranches selection, ulong seed)

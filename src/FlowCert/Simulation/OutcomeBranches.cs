@@ -15,9 +15,10 @@ public sealed record OutcomeBranches
 
     public static OutcomeBranches All { get; } = new(null, 0);
 
-    /// <summary>K uniformly random raw-outcome strings (duplicates merged) plus the all-zero one.</summary>
+    /// <summary>K uniformly random raw-outcome strings (duplicates merged) plus the all-zero one; 0 &lt;= K &lt;= <see cref="MaxExhaustive"/>.</summary>
     public static OutcomeBranches Sample(int k, ulong seed)
-        => k >= 0 ? new(k, seed) : throw new ArgumentOutOfRangeException(nameof(k), "the sample size must not be negative");
+        => k is >= 0 and <= (int)MaxExhaustive ? new(k, seed)
+            : throw new ArgumentOutOfRangeException(nameof(k), $"the sample size must be from 0 to {MaxExhaustive}");
 
     public bool IsExhaustive => SampleSize is null;
 }

@@ -125,4 +125,15 @@ public class SimulateCommandTests
         Assert.Equal(2, other.Code);
         Assert.Contains("different graphs", other.Err);
     }
+
+    [Theory]
+    [InlineData("1048577")]
+    [InlineData("99999999999")]
+    public void MoreSampledBranchesThanTheExhaustiveLimitAreRefused(string k)
+    {
+        var (code, o, e) = Run("simulate", Corpus("splitter-pair.ograph"), "--cert", Corpus("splitter-pair.F3.general.json"), "--branches", k);
+        Assert.Equal(2, code);
+        Assert.Equal("", o);
+        Assert.Contains("at most 1048576", e);
+    }
 }
