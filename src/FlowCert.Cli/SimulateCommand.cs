@@ -21,7 +21,7 @@ public static class SimulateCommand
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
         var cert = new Option<string>("--cert") { Description = "a flow certificate over F_p (JSON)", Required = true };
-        var dim = new Option<int?>("--dim") { Description = "qudit dimension; must equal the certificate's prime (the default)" };
+        var dim = new Option<string?>("--dim") { Description = "qudit dimension, a prime; must equal the certificate's prime (the default)" };
         var seed = new Option<ulong>("--seed") { Description = "seed of the random angles, input state and sampled branches", DefaultValueFactory = _ => 1 };
         var branches = new Option<string>("--branches") { Description = "all (every outcome string) or K (K random ones plus the all-zero one)", DefaultValueFactory = _ => "all" };
         var cmd = new Command("simulate", "Simulate the pattern of a flow certificate over qudits; exit 0 deterministic, 1 outcome-dependent, 2 bad input") { graph, cert, inputs, outputs, dim, seed, branches };
@@ -30,12 +30,11 @@ public static class SimulateCommand
         return cmd;
     }
 
-    public static int Execute(string graphPath, string certPath, int? dim, ulong seed, string branchText, TextWriter o, TextWriter stderr,
+    public static int Execute(string graphPath, string certPath, string? dimText, ulong seed, string branchText, TextWriter o, TextWriter stderr,
         string? inputs = null, string? outputs = null)
     {
         var selection = ParseBranches(branchText, seed);
-        if (dim is { } d && (d < 2 || !Primality.IsPrime((ulong)d)))
-            throw new UserInputException($"--dim {d} is not a prime: qudit flows are defined for prime dimensions (see the README section \"Composite dimensions\").");
+        ulong? dim = dimText is null ? null : ParseDimension(dimText);
         var graph = GraphFiles.Read(graphPath, inputs, outputs);
         var result = ScheduleCommand.Read(certPath);
         if (CanonicalForm.Sha256(graph) != CanonicalForm.Sha256(result.Graph))
@@ -51,6 +50,17 @@ public static class SimulateCommand
         catch (Exception e) when (e is SimulationException or ScheduleException) { throw new UserInputException($"{certPath}: {e.Message}"); }
         Write(o, graphPath, certPath, result.Field.Name, pattern, report, selection, seed);
         return report.Deterministic ? ExitCode.Flow : ExitCode.NoFlow;
+    }
+
+    /// <summary>A qudit dimension is a prime, parsed as every command parses a field (FieldSpec.Parse).</summary>
+    private static ulong ParseDimension(string text)
+    {
+        FieldSpec spec;
+        try { spec = FieldSpec.Parse(text); }
+        catch (FieldSpecException e) { throw new UserInputException($"--dim {text}: {e.Message}"); }
+        if (spec.IsRationals)
+            throw new UserInputException($"--dim {text}: a qudit dimension is a prime; Q is the continuous-variable case, which no state vector can hold.");
+        return spec.Prime;
     }
 
     private static OutcomeBranches ParseBranches(string text, ulong seed)

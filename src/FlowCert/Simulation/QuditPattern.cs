@@ -48,7 +48,7 @@ public sealed class QuditPattern
     /// over Q, over a prime above 2^31 - 1, when p differs from the field's prime, or beyond <see cref="MaxAmplitudes"/>;
     /// <see cref="ScheduleException"/> for a noflow or malformed certificate.
     /// </summary>
-    public static QuditPattern FromFlow(FlowResult r, int? dimension, ulong seed)
+    public static QuditPattern FromFlow(FlowResult r, ulong? dimension, ulong seed)
     {
         if (r.Field.IsRationals)
             throw new SimulationException("the certificate is over Q, the continuous-variable case: its modes have an infinite-dimensional " +
@@ -58,7 +58,7 @@ public sealed class QuditPattern
             throw new SimulationException($"the certificate is over {r.Field.Name}: qudits of a dimension above 2^31 - 1 are beyond the simulator " +
                 $"(its state holds at most 2^22 = {MaxAmplitudes} amplitudes). Solve the graph over a small prime (for example --field 3) and simulate that certificate.");
         int p = (int)r.Field.Prime;
-        if (dimension is { } d && d != p)
+        if (dimension is { } d && d != r.Field.Prime)
             throw new SimulationException($"--dim {d} does not match the certificate's field {r.Field.Name}: its corrections hold mod {p} only. " +
                 $"Use --dim {p}, or solve the graph over {d} and simulate that certificate.");
         var g = r.Graph;

@@ -41,7 +41,9 @@ public class SimulateCommandTests
 
     [Theory]
     [InlineData("5", "does not match")]
-    [InlineData("4", "not a prime")]
+    [InlineData("4", "--dim 4: 4 is composite")]
+    [InlineData("1", "--dim 1: 1 is not a prime")]
+    [InlineData("Q", "--dim Q: a qudit dimension is a prime")]
     public void AWrongDimensionIsRefused(string dim, string expected)
     {
         var (code, _, e) = Run("simulate", Corpus("splitter-pair.ograph"), "--cert", Corpus("splitter-pair.F3.general.json"), "--dim", dim);
