@@ -63,4 +63,6 @@ public sealed record FeedForwardSchedule
     /// <summary>Frames of measured nodes after round 1 (measurement order), then of the outputs (sorted).</summary>
     public required IReadOnlyList<NodeFrame> Frames { get; init; }
     public required ScheduleStatistics Statistics { get; init; }
+    /// <summary>Edges whose weight is 0 in the field (<see cref="VanishingEdges"/>): every format reports them.</summary>
+    public required IReadOnlyList<WeightedEdge> VanishedEdges { get; init; }
 }

@@ -1,5 +1,6 @@
 using FlowCert.Algebra;
 using FlowCert.Flows;
+using FlowCert.Graphs;
 
 namespace FlowCert.Schedules;
 
@@ -53,6 +54,7 @@ public static class ScheduleBuilder
                 Graph = g, Field = r.Field, Kind = r.Kind, Rounds = r.Rounds.Select(x => (IReadOnlyList<int>)x.Order().ToArray()).ToList(),
                 Corrections = corrections, Frames = frames,
                 Statistics = StatisticsOf(r, s.Order, frames, corrections),
+                VanishedEdges = VanishingEdges.In(g, r.Field),
             };
         }
     }

@@ -26,6 +26,7 @@ public static class ScheduleCsv
         Row(Header.Split(','));
         for (int k = 0; k < s.Rounds.Count; k++) foreach (var v in s.Rounds[k]) Row("measure", g.Names[v], roundOf[v], "", "", "");
         foreach (var o in g.SortedOutputs) Row("output", g.Names[o], "output", "", "", "");
+        foreach (var e in s.VanishedEdges) Row("vanished", g.Names[e.U], "", g.Names[e.V], e.Weight.ToString(), "");
         foreach (var c in s.Corrections) Row("correction", g.Names[c.Target], roundOf[c.Target], g.Names[c.Source], c.X, c.Z);
         foreach (var fr in s.Frames)
         {

@@ -30,6 +30,8 @@ public static class ScheduleJson
             w.WritePropertyName("flow"); w.WriteValue(CertificateWriter.KindName(s.Kind));
             w.WritePropertyName("field"); w.WriteValue(s.Field.Name);
             w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(g));
+            w.WritePropertyName("vanishedEdges");
+            w.WriteRawValue(JsonConvert.SerializeObject(s.VanishedEdges.Select(e => new[] { g.Names[e.U], g.Names[e.V], e.Weight.ToString() }).ToArray()));
             w.WritePropertyName("depth"); w.WriteValue(st.Depth);
             w.WritePropertyName("rounds"); w.WriteStartArray(); foreach (var r in s.Rounds) Names(r); w.WriteEndArray();
             w.WritePropertyName("outputs"); Names(g.SortedOutputs);

@@ -1,5 +1,6 @@
 using System.Text;
 using FlowCert.Certificates;
+using FlowCert.Graphs;
 
 namespace FlowCert.Schedules;
 
@@ -33,6 +34,7 @@ public static class ScheduleText
 
         Line($"feed-forward schedule: field {s.Field.Name}, {CertificateWriter.KindName(s.Kind)} flow, depth {st.Depth}; " +
              $"{g.NodeCount} nodes: {g.Inputs.Count} input(s), {g.Outputs.Count} output(s), {g.NodeCount - g.Outputs.Count} measured");
+        if (s.VanishedEdges.Count > 0) Line("warning: " + VanishingEdges.Warning(g, s.Field, s.VanishedEdges));
         Line($"m_v = outcome of v re-read through its frame (raw outcome - b_v); all arithmetic exact, in {s.Field.Name}");
         Line();
         Line("rounds (round 1 is measured first; nodes of one round in parallel)");

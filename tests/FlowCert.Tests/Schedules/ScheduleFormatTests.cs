@@ -7,6 +7,25 @@ namespace FlowCert.Tests.Schedules;
 public class ScheduleFormatTests
 {
     private static FeedForwardSchedule Patch() => ScheduleBuilder.Build(FlowCert.Tests.Simulation.SimulationCases.Demo("qutrit-patch.F3.general.json"));
+    private static FeedForwardSchedule Splitter() => ScheduleBuilder.Build(FlowCert.Tests.Simulation.SimulationCases.Demo("splitter-pair.F3.general.json"));
+
+    [Fact]
+    public void EveryFormatListsTheEdgesThatVanishInTheField()
+    {
+        // The patch's rung r0c2-r1c2 has weight 3, which is 0 in F3 (flows.md section 1: report it, never silently).
+        var s = Patch();
+        Assert.Contains("\nwarning: 1 edge(s) have weight 0 in F3 and vanish: r0c2-r1c2 (3)\n", ScheduleText.Write(s));
+        var rows = ScheduleCsv.Write(s).Split('\n').Select(l => l.Split(',')).ToList();
+        Assert.Equal([["vanished", "r0c2", "", "r1c2", "3", ""]], rows.Where(r => r[0] == "vanished"));
+        var json = JObject.Parse(ScheduleJson.Write(s));
+        Assert.Equal("[[\"r0c2\",\"r1c2\",\"3\"]]", json["vanishedEdges"]!.ToString(Newtonsoft.Json.Formatting.None));
+
+        // The splitter pair's weights are 1 and -1: nothing vanishes in F3, and nothing is said.
+        var none = Splitter();
+        Assert.DoesNotContain("warning", ScheduleText.Write(none));
+        Assert.DoesNotContain("\nvanished,", ScheduleCsv.Write(none));
+        Assert.Empty((JArray)JObject.Parse(ScheduleJson.Write(none))["vanishedEdges"]!);
+    }
 
     [Fact]
     public void TheJsonCarriesEveryCorrectionAndFrameWithExactStrings()
@@ -16,7 +35,7 @@ public class ScheduleFormatTests
         Assert.DoesNotContain("\r", text);
         Assert.Equal(text, ScheduleJson.Write(Patch()));
         var root = JObject.Parse(text);
-        Assert.Equal(new[] { "format", "version", "flow", "field", "graphSha256", "depth", "rounds", "outputs", "corrections", "frames", "statistics" },
+        Assert.Equal(new[] { "format", "version", "flow", "field", "graphSha256", "vanishedEdges", "depth", "rounds", "outputs", "corrections", "frames", "statistics" },
             root.Properties().Select(p => p.Name));
         Assert.Equal("flowcert-schedule", (string)root["format"]!);
         Assert.Equal(s.Corrections.Count, ((JArray)root["corrections"]!).Count);
