@@ -10,7 +10,7 @@ namespace FlowCert.Drawing;
 /// The picture of <see cref="SvgPicture"/> in Graphviz DOT, for users who lay out with Graphviz: the
 /// same colours, inputs as boxes and outputs as double circles (<see cref="DotWriter.NodeShape"/>), a
 /// flow's rounds as ranks from left to right with the outputs last, corrections as orange arrows and a
-/// blocked set in red; the legend is the graph's label.
+/// blocked set in red; the legend is the graph's label (it names the edges that vanish in the certificate's field).
 /// </summary>
 public static class DotPicture
 {
@@ -67,6 +67,8 @@ public static class DotPicture
     private static string Legend(OpenGraph g, FlowResult? r)
     {
         var parts = new List<string> { "boxes: inputs", "green double circles: outputs", "grey lines: edges (label: weight unless 1)" };
+        if (r is not null && VanishingEdges.In(g, r.Field) is { Count: > 0 } vanished)
+            parts.Add(VanishingEdges.Warning(g, r.Field, vanished));
         if (r is { HasFlow: true })
             parts.Add($"orange arrows: corrections over {r.Field.Name} (label: coefficient unless 1); ranks left to right: rounds 1 to {r.Depth}, then outputs");
         if (r?.Obstruction is { } b)

@@ -1,11 +1,15 @@
 using System.Text;
 using FlowCert.Flows;
+using FlowCert.Graphs;
 using static FlowCert.Drawing.SvgPicture;
 using static FlowCert.Drawing.SvgText;
 
 namespace FlowCert.Drawing;
 
-/// <summary>The legend drawn under a picture: one line per element that appears in it, plus notes.</summary>
+/// <summary>
+/// The legend drawn under a picture: one line per element that appears in it, plus notes (among them the
+/// edges whose weight is 0 in the certificate's field).
+/// </summary>
 internal static class SvgLegend
 {
     /// <summary>The sample drawn before a legend line.</summary>
@@ -24,6 +28,8 @@ internal static class SvgLegend
         if (g.Outputs.Count > 0) lines.Add(new(Glyph.Output, "output: never measured"));
         if (g.NodeCount > g.Outputs.Count) lines.Add(new(Glyph.Measured, r is { HasFlow: false } ? "measured node outside the blocked set" : "measured node"));
         if (g.Edges.Count > 0) lines.Add(new(Glyph.Edge, "edge, labelled with its weight (no label: weight 1)"));
+        if (r is not null && VanishingEdges.In(g, r.Field) is { Count: > 0 } vanished)
+            lines.Add(new(Glyph.None, VanishingEdges.Warning(g, r.Field, vanished)));
         if (r is { HasFlow: true })
         {
             lines.Add(new(Glyph.Correction, $"correction: from a measured node to each node of its correction vector over {r.Field.Name} (no label: coefficient 1)"));

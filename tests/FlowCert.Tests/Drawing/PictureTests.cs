@@ -60,6 +60,20 @@ public class PictureTests
     }
 
     [Fact]
+    public void EdgesThatVanishInTheCertificatesFieldAreNotedInTheLegend()
+    {
+        // The patch's rung r0c2-r1c2 has weight 3: 0 in F3, not in F5 (flows.md section 1: never silently).
+        const string Note = "1 edge(s) have weight 0 in F3 and vanish: r0c2-r1c2 (3)";
+        var f3 = Solve("qutrit-patch", FieldSpec.PrimeField(3));
+        var legend = XDocument.Parse(Draw(f3.Graph, f3)).Descendants(Svg + "g").Single(g => (string?)g.Attribute("id") == "legend");
+        Assert.Contains(legend.Descendants(Svg + "text"), t => t.Value == Note);
+        Assert.Contains(Note, DotPicture.Write(f3.Graph, f3, "patch"));
+        var f5 = Solve("qutrit-patch", FieldSpec.PrimeField(5));
+        Assert.DoesNotContain("vanish", Draw(f5.Graph, f5));
+        Assert.DoesNotContain("vanish", DotPicture.Write(f5.Graph, f5, "patch"));
+    }
+
+    [Fact]
     public void AProofOfAbsenceShowsTheBlockedSetAndNoCorrections()
     {
         var r = Solve("merge-attempt", FieldSpec.Rationals);
