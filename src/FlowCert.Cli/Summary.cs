@@ -1,5 +1,6 @@
 using FlowCert.Certificates;
 using FlowCert.Flows;
+using FlowCert.Graphs;
 
 namespace FlowCert.Cli;
 
@@ -20,8 +21,7 @@ public static class Summary
         o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
         o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
         if (r.VanishedEdges.Count > 0)
-            o.WriteLine($"warning   {r.VanishedEdges.Count} edge(s) have weight 0 in {r.Field.Name} and vanish: " +
-                string.Join(", ", r.VanishedEdges.Take(MaxNodesShown).Select(e => $"{g.Names[e.U]}-{g.Names[e.V]} ({e.Weight})")));
+            o.WriteLine("warning   " + VanishingEdges.Warning(g, r.Field, r.VanishedEdges));
         if (r.Obstruction is { } blocked)
         {
             o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");

@@ -301,4 +301,16 @@ public class SolveCommandTests
         // 3/4, 3 and 6/5 have numerators divisible by 3 (flows.md section 1); c - d stays.
         Assert.Equal(["a b 3/4", "b c 3", "d e 6/5"], vanished);
     }
+
+    [Fact]
+    public void ALongListOfVanishedEdgesIsCutAfterTenAndSaysHowManyThereAre()
+    {
+        using var w = new Workspace();
+        // Twelve rungs of weight 2, all 0 in F2.
+        var graph = w.Write("ladder.ograph", string.Concat(Enumerable.Range(0, 12).Select(i => $"edge n{i:00} m{i:00} 2\n")));
+        var line = Flowcert.InProcess("solve", graph, "--field", "2").Stdout.Split('\n').Single(l => l.StartsWith("warning"));
+        Assert.Contains("12 edge(s) have weight 0 in F2 and vanish: m00-n00 (2), ", line);
+        Assert.EndsWith(", ... (12 in all)", line);
+        Assert.Equal(10, line.Split(", ").Count(part => part.EndsWith("(2)")));
+    }
 }
