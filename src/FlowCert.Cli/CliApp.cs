@@ -39,6 +39,7 @@ public static class CliApp
         }
         try
         {
+            PathSymbols.RefuseEmpty(parsed);
             return parsed.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
         }
         catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException
@@ -57,12 +58,6 @@ public static class CliApp
             stderr.WriteLine($"flowcert: internal error: {e}");
             return ExitCode.Internal;
         }
-    }
-
-    /// <summary>Refuses an empty path (the file APIs would throw an ArgumentException, reported as an internal error).</summary>
-    public static void RequirePath(string path, string what)
-    {
-        if (string.IsNullOrEmpty(path)) throw new UserInputException($"{what} is empty: give a file or folder name.");
     }
 
     /// <summary>Parses --flow.</summary>

@@ -16,8 +16,8 @@ public static class ConvertCommand
 
     public static Command Create(TextWriter stdout)
     {
-        var input = new Argument<string>("IN") { Description = "graph to read: .ograph, .g6, .s6, .mtx or .json" };
-        var output = new Argument<string>("OUT") { Description = "graph to write: .ograph (canonical form), .g6, .s6, .mtx, .json or .dot" };
+        var input = new PathArgument("IN") { Description = "graph to read: .ograph, .g6, .s6, .mtx or .json" };
+        var output = new PathArgument("OUT") { Description = "graph to write: .ograph (canonical form), .g6, .s6, .mtx, .json or .dot" };
         var inputs = InputsOption();
         var outputs = OutputsOption();
         var cmd = new Command("convert", "Convert a graph between file formats, chosen by the file extensions") { input, output, inputs, outputs };

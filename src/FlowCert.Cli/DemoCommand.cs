@@ -10,7 +10,7 @@ public static class DemoCommand
 {
     public static Command Create(TextWriter stdout)
     {
-        var outDir = new Option<string>("--out-dir") { Description = "folder for the demo graphs and certificates", DefaultValueFactory = _ => "flowcert-demo" };
+        var outDir = new PathOption("--out-dir") { Description = "folder for the demo graphs and certificates", DefaultValueFactory = _ => "flowcert-demo" };
         var cmd = new Command("demo", "Solve the built-in Merrow Reach designs over Q, F2, F3 and F5 and write their certificates") { outDir };
         cmd.SetAction(p => Execute(p.GetValue(outDir)!, stdout));
         return cmd;
@@ -18,7 +18,6 @@ public static class DemoCommand
 
     public static int Execute(string outDir, TextWriter o)
     {
-        CliApp.RequirePath(outDir, "--out-dir");
         Directory.CreateDirectory(outDir);
         o.WriteLine("Merrow Reach lab (a fictional team): which of this week's designs run deterministically?");
         o.WriteLine();

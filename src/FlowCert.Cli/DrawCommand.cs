@@ -12,11 +12,11 @@ public static class DrawCommand
 {
     public static Command Create(TextWriter stdout)
     {
-        var graph = new Argument<string>("GRAPH") { Description = "the graph: .ograph, .g6, .s6, .mtx or .json" };
-        var cert = new Option<string?>("--cert") { Description = "a certificate of this graph: draw its rounds and corrections, or its blocked set" };
+        var graph = new PathArgument("GRAPH") { Description = "the graph: .ograph, .g6, .s6, .mtx or .json" };
+        var cert = new PathOption("--cert") { Description = "a certificate of this graph: draw its rounds and corrections, or its blocked set" };
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
-        var output = new Option<string>("--out") { Description = "the picture to write: .svg, or .dot for Graphviz", Required = true };
+        var output = new PathOption("--out") { Description = "the picture to write: .svg, or .dot for Graphviz", Required = true };
         var cmd = new Command("draw", "Draw a graph, and with a certificate its flow or proof of absence, as SVG or DOT") { graph, cert, inputs, outputs, output };
         cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(cert), p.GetValue(inputs), p.GetValue(outputs), p.GetValue(output)!, stdout));
         return cmd;

@@ -20,7 +20,7 @@ public static class GenerateCommand
         var weight = new Option<string?>("--weight") { Description = "one weight for every edge (default 1)" };
         var directionWeights = new Option<string?>("--direction-weights") { Description = "a weight per lattice direction, such as h=1,v=-1/2 (others weigh 1)" };
         var randomWeights = new Option<string?>("--random-weights") { Description = "draw each edge's weight from this list, such as 1,-1,1/2, using --seed" };
-        var output = new Option<string>("--out") { Description = "the graph file to write (.ograph with position hints, or .g6 .s6 .mtx .json .dot)", Required = true };
+        var output = new PathOption("--out") { Description = "the graph file to write (.ograph with position hints, or .g6 .s6 .mtx .json .dot)", Required = true };
         var cmd = new Command("generate", "Write a lattice or random graph of a standard family (docs/families.md)")
             { family, size, periodic, probability, degree, inputCount, outputCount, seed, weight, directionWeights, randomWeights, output };
         cmd.SetAction(p =>

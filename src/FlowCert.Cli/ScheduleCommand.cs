@@ -10,9 +10,9 @@ public static class ScheduleCommand
 {
     public static Command Create(TextWriter stdout)
     {
-        var cert = new Argument<string>("CERT") { Description = "a flow certificate (JSON) written by flowcert solve" };
+        var cert = new PathArgument("CERT") { Description = "a flow certificate (JSON) written by flowcert solve" };
         var format = new Option<string>("--format") { Description = "text (a readable table), csv or json (for tools; see docs/schedule.md)", DefaultValueFactory = _ => "text" };
-        var output = new Option<string?>("--out") { Description = "write the schedule to this file instead of standard output" };
+        var output = new PathOption("--out") { Description = "write the schedule to this file instead of standard output" };
         var cmd = new Command("schedule", "Rounds, the corrections each outcome triggers, every node's frame and feed-forward statistics; exit 0, or 2 for a noflow or invalid certificate") { cert, format, output };
         cmd.SetAction(p => Execute(p.GetValue(cert)!, p.GetValue(format)!, p.GetValue(output), stdout));
         return cmd;

@@ -17,10 +17,10 @@ public static class SimulateCommand
 {
     public static Command Create(TextWriter stdout, TextWriter stderr)
     {
-        var graph = new Argument<string>("GRAPH") { Description = "the open graph the certificate is about: .ograph, .g6, .s6, .mtx or .json" };
+        var graph = new PathArgument("GRAPH") { Description = "the open graph the certificate is about: .ograph, .g6, .s6, .mtx or .json" };
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
-        var cert = new Option<string>("--cert") { Description = "a flow certificate over F_p (JSON)", Required = true };
+        var cert = new PathOption("--cert") { Description = "a flow certificate over F_p (JSON)", Required = true };
         var dim = new Option<string?>("--dim") { Description = "qudit dimension, a prime; must equal the certificate's prime (the default)" };
         var seed = new Option<ulong>("--seed") { Description = "seed of the random angles, input state and sampled branches", DefaultValueFactory = _ => 1 };
         var branches = new Option<string>("--branches") { Description = "all (every outcome string) or K (K random ones plus the all-zero one)", DefaultValueFactory = _ => "all" };

@@ -14,12 +14,12 @@ public static class SolveCommand
 {
     public static Command Create(TextWriter stdout)
     {
-        var graph = new Argument<string>("GRAPH") { Description = "the open graph: .ograph, .g6, .s6, .mtx or .json" };
+        var graph = new PathArgument("GRAPH") { Description = "the open graph: .ograph, .g6, .s6, .mtx or .json" };
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
         var field = new Option<string>("--field") { Description = "Q (rationals, continuous variables) or a prime p (qudits of dimension p)", DefaultValueFactory = _ => "Q" };
         var flow = new Option<string>("--flow") { Description = "general or causal", DefaultValueFactory = _ => "general" };
-        var output = new Option<string?>("--out") { Description = "write the certificate (JSON) to this file" };
+        var output = new PathOption("--out") { Description = "write the certificate (JSON) to this file" };
         var json = new Option<bool>("--json") { Description = "print one JSON object instead of the summary" };
         var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs };
         cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs)));
@@ -29,8 +29,6 @@ public static class SolveCommand
     public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout,
         string? inputs = null, string? outputs = null)
     {
-        CliApp.RequirePath(graphPath, "the graph file");
-        if (outPath is not null) CliApp.RequirePath(outPath, "--out");
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
