@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Numerics;
 using FlowCert.Algebra;
 
 namespace FlowCert.Graphs.Families;
@@ -73,7 +74,8 @@ public static class FamilyGenerator
                 throw new FamilyParameterException($"bad size '{text}' for {info.Name}: write {info.SizeForm} with whole numbers of at least 1");
         if (items.Length != parts)
             throw new FamilyParameterException($"bad size '{text}' for {info.Name}: write {info.SizeForm}");
-        long total = size.Aggregate(1L, (a, b) => a * b);
+        // Exact: three sizes below 2^31 can multiply past 2^64, where a 64-bit product would wrap round.
+        var total = size.Aggregate(BigInteger.One, (a, b) => a * b);
         if (total > MaxNodes) throw new FamilyParameterException($"{text} makes {total} nodes, more than the {MaxNodes} the generator writes");
         return size;
     }

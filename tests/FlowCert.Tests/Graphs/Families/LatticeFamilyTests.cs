@@ -237,6 +237,21 @@ public class LatticeFamilyTests
         Assert.Contains(expected, e.Message);
     }
 
+    /// <summary>
+    /// Sizes whose node count overflows 64 bits (2^21 * 2^21 * 2^22 = 2^64 wraps to 0) are refused with the
+    /// exact count, not let through to build a lattice without end. Parsed alone, so a regression fails fast.
+    /// </summary>
+    [Theory]
+    [InlineData("2097152x2097152x4194304", "18446744073709551616")]
+    [InlineData("2147483647x2147483647x2147483647", "9903520300447984150353281023")]
+    [InlineData("4000000x1x2", "8000000")]
+    public void SizesBeyondTheNodeLimitAreRefusedEvenWhenTheirProductOverflows(string size, string count)
+    {
+        var cubic = FamilyGenerator.Catalog.Single(f => f.Name == "cubic");
+        var e = Assert.Throws<FamilyParameterException>(() => FamilyGenerator.ParseSize(size, cubic));
+        Assert.Equal($"{size} makes {count} nodes, more than the {FamilyGenerator.MaxNodes} the generator writes", e.Message);
+    }
+
     [Theory]
     [InlineData("square", "2x5", "3 rows")]
     [InlineData("hexagonal", "3x4", "even number of rows")]
