@@ -87,6 +87,7 @@ public sealed class FamilyCommandsTests : IDisposable
     [Theory]
     [InlineData(new[] { "generate", "pentagonal", "--size", "3", "--out", "x.ograph" }, "unknown family 'pentagonal'")]
     [InlineData(new[] { "generate", "cubic", "--size", "2097152x2097152x4194304", "--out", "x.ograph" }, "makes 18446744073709551616 nodes, more than")]
+    [InlineData(new[] { "generate", "regular", "--size", "65536", "--degree", "32768", "--out", "x.ograph" }, "has 1073741824 edges, more than")]
     [InlineData(new[] { "generate", "square", "--size", "3x3", "--weight", "2", "--random-weights", "1,2", "--out", "x.ograph" }, "at most one of")]
     [InlineData(new[] { "generate", "square", "--size", "3x3", "--weight", "0", "--out", "x.ograph" }, "zero")]
     [InlineData(new[] { "generate", "square", "--size", "3x3", "--out", "x.txt" }, "unknown graph file extension '.txt'")]

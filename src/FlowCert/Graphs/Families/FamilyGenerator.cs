@@ -16,6 +16,8 @@ public static class FamilyGenerator
     public const long MaxNodes = 4_000_000;
     /// <summary>The most nodes of G(n, q), which draws once per pair of nodes.</summary>
     public const int MaxBinomialNodes = 20_000;
+    /// <summary>The most edges (n d / 2) of a random d-regular graph, whose pairing holds n d points at once.</summary>
+    public const long MaxRegularEdges = 8_000_000;
 
     public static readonly IReadOnlyList<FamilyInfo> Catalog =
     [
@@ -97,6 +99,9 @@ public static class FamilyGenerator
         if (degree is not { } d) throw new FamilyParameterException("regular needs a degree");
         if (d < 0 || d >= n) throw new FamilyParameterException($"a {d}-regular graph on {n} nodes needs 0 <= degree < {n}");
         if ((long)n * d % 2 != 0) throw new FamilyParameterException($"no {d}-regular graph on {n} nodes exists: n times the degree must be even");
+        long edges = (long)n * d / 2; // n <= MaxNodes and d < n: far below 2^63
+        if (edges > MaxRegularEdges)
+            throw new FamilyParameterException($"a {d}-regular graph on {n} nodes has {edges} edges, more than the {MaxRegularEdges} the generator draws: choose a smaller size or degree");
         return d;
     }
 

@@ -114,4 +114,18 @@ public class RandomFamilyTests
         var e = Assert.Throws<FamilyParameterException>(() => Make(family, size, 1, q: q, degree: degree));
         Assert.Contains(expected, e.Message);
     }
+
+    /// <summary>
+    /// n d / 2 edges beyond the limit are refused before any pairing starts: 65536 * 32768 = 2^31 points
+    /// overflows a 32-bit count, and would otherwise fail as an internal error.
+    /// </summary>
+    [Theory]
+    [InlineData("65536", 32768, "1073741824")]
+    [InlineData("4000000", 3999999, "7999998000000")]
+    [InlineData("4000000", 5, "10000000")]
+    public void RegularGraphsWithTooManyEdgesAreRefused(string size, int degree, string edges)
+    {
+        var e = Assert.Throws<FamilyParameterException>(() => Make("regular", size, 1, degree: degree));
+        Assert.Equal($"a {degree}-regular graph on {size} nodes has {edges} edges, more than the {FamilyGenerator.MaxRegularEdges} the generator draws: choose a smaller size or degree", e.Message);
+    }
 }
