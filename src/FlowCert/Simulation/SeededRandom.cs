@@ -1,8 +1,11 @@
+using FlowCert.Graphs.Families;
+
 namespace FlowCert.Simulation;
 
 /// <summary>
 /// A small deterministic generator (xoshiro256** seeded through SplitMix64; common practice): the same seed
 /// gives the same numbers on every machine and .NET version, unlike <see cref="Random"/>'s unspecified algorithm.
+/// The four state words are the first four outputs of the project's one <see cref="SplitMix64"/> for the seed.
 /// </summary>
 public sealed class SeededRandom
 {
@@ -10,16 +13,8 @@ public sealed class SeededRandom
 
     public SeededRandom(ulong seed)
     {
-        ulong x = seed;
-        s0 = SplitMix(ref x); s1 = SplitMix(ref x); s2 = SplitMix(ref x); s3 = SplitMix(ref x);
-    }
-
-    private static ulong SplitMix(ref ulong x)
-    {
-        ulong z = x += 0x9E3779B97F4A7C15UL;
-        z = (z ^ (z >> 30)) * 0xBF58476D1CE4E5B9UL;
-        z = (z ^ (z >> 27)) * 0x94D049BB133111EBUL;
-        return z ^ (z >> 31);
+        var seeder = new SplitMix64(seed);
+        s0 = seeder.Next(); s1 = seeder.Next(); s2 = seeder.Next(); s3 = seeder.Next();
     }
 
     public ulong NextUInt64()
