@@ -22,15 +22,19 @@ public static class Program
         }
         catch (InvalidCertificate e)
         {
-            stdout.WriteLine($"invalid: {e.Message}");
+            stdout.WriteLine($"invalid: {OneLine(e.Message)}");
             return 1;
         }
         catch (UnreadableInput e)
         {
-            stderr.WriteLine($"unreadable: {e.Message}");
+            stderr.WriteLine($"unreadable: {OneLine(e.Message)}");
             return 2;
         }
     }
+
+    /// <summary>Control characters from the input (a newline in a name, say) are shown as \uXXXX escapes.</summary>
+    static string OneLine(string message) =>
+        string.Concat(message.Select(ch => char.IsControl(ch) ? $"\\u{(int)ch:x4}" : ch.ToString()));
 
     /// <summary>One certificate path and at most one --graph option; null for anything else.</summary>
     static (string Cert, string? Graph)? Arguments(string[] args)

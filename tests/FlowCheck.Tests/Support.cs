@@ -18,10 +18,12 @@ public static class Support
         return Rehash(cert);
     }
 
-    /// <summary>Sets graphSha256 to the hash of the graph as it now stands.</summary>
+    /// <summary>Sets graphSha256 to the hash of the graph as it now stands (left alone when the graph is
+    /// too malformed to have a canonical form: the checker must reject it before looking at the hash).</summary>
     public static JObject Rehash(JObject cert)
     {
-        if (cert["graph"] is JObject g) cert["graphSha256"] = Sha256Hex(Canonical(g));
+        try { cert["graphSha256"] = Sha256Hex(Canonical((JObject)cert["graph"]!)); }
+        catch (Exception e) when (e is InvalidCastException or IndexOutOfRangeException or ArgumentException or NullReferenceException) { }
         return cert;
     }
 
@@ -83,7 +85,7 @@ public static class Support
     {
         Assert.Equal(1, r.Code);
         Assert.StartsWith("invalid: ", r.First);
-        foreach (var f in fragments) Assert.Contains(f, r.First);
+        foreach (var f in fragments) Assert.True(r.First.Contains(f), $"expected \"{f}\" in \"{r.First}\"");
         Assert.Equal("", r.Err);
     }
 
