@@ -1,1 +1,6 @@
-﻿Console.WriteLine("Hello, World!");
+namespace FlowCert.Cli;
+
+internal static class Program
+{
+    private static int Main(string[] args) => CliApp.Run(args, Console.Out, Console.Error);
+}

@@ -1,0 +1,60 @@
+using System.CommandLine;
+using FlowCert.Algebra;
+using FlowCert.Flows;
+using FlowCert.Graphs;
+
+namespace FlowCert.Cli;
+
+/// <summary>Exit codes of every command.</summary>
+public static class ExitCode
+{
+    public const int Flow = 0, NoFlow = 1, BadInput = 2, Internal = 3;
+}
+
+/// <summary>A mistake in how the command was called or in a file it was given; exit code 2.</summary>
+public sealed class UserInputException(string message) : Exception(message);
+
+/// <summary>The <c>flowcert</c> command: parses arguments, runs one subcommand, maps errors to exit codes.</summary>
+public static class CliApp
+{
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    {
+        var root = new RootCommand("flowcert: exact flows for measurement-based quantum computing on weighted graph states");
+        root.Subcommands.Add(SolveCommand.Create(stdout));
+        root.Subcommands.Add(DemoCommand.Create(stdout));
+        var parsed = root.Parse(args);
+        if (parsed.Errors.Count > 0)
+        {
+            foreach (var e in parsed.Errors) stderr.WriteLine($"flowcert: {e.Message}");
+            stderr.WriteLine("Run 'flowcert --help' for usage.");
+            return ExitCode.BadInput;
+        }
+        try
+        {
+            return parsed.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
+        }
+        catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException)
+        {
+            stderr.WriteLine($"flowcert: {e.Message}");
+            return ExitCode.BadInput;
+        }
+        catch (Exception e) when (e is FileNotFoundException or DirectoryNotFoundException or UnauthorizedAccessException or IOException)
+        {
+            stderr.WriteLine($"flowcert: {e.Message}");
+            return ExitCode.BadInput;
+        }
+        catch (Exception e)
+        {
+            stderr.WriteLine($"flowcert: internal error: {e}");
+            return ExitCode.Internal;
+        }
+    }
+
+    /// <summary>Parses --flow.</summary>
+    public static FlowKind ParseKind(string text) => text switch
+    {
+        "general" => FlowKind.General,
+        "causal" => FlowKind.Causal,
+        _ => throw new UserInputException($"'{text}' is not a kind of flow: write general or causal."),
+    };
+}

@@ -1,0 +1,70 @@
+using System.CommandLine;
+using System.Diagnostics;
+using FlowCert.Algebra;
+using FlowCert.Certificates;
+using FlowCert.Flows;
+using FlowCert.Graphs;
+using Newtonsoft.Json;
+
+namespace FlowCert.Cli;
+
+/// <summary><c>flowcert solve GRAPH [--field Q|P] [--flow general|causal] [--out CERT] [--json]</c>.</summary>
+public static class SolveCommand
+{
+    public static Command Create(TextWriter stdout)
+    {
+        var graph = new Argument<string>("GRAPH") { Description = "the open graph (.ograph)" };
+        var field = new Option<string>("--field") { Description = "Q (rationals, continuous variables) or a prime p (qudits of dimension p)", DefaultValueFactory = _ => "Q" };
+        var flow = new Option<string>("--flow") { Description = "general or causal", DefaultValueFactory = _ => "general" };
+        var output = new Option<string?>("--out") { Description = "write the certificate (JSON) to this file" };
+        var json = new Option<bool>("--json") { Description = "print one JSON object instead of the summary" };
+        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout));
+        return cmd;
+    }
+
+    public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout)
+    {
+        var spec = FieldSpec.Parse(fieldText);
+        var kind = CliApp.ParseKind(flowText);
+        var clock = Stopwatch.StartNew();
+        var g = OgraphReader.ReadFile(graphPath);
+        var parseSeconds = clock.Elapsed.TotalSeconds;
+        clock.Restart();
+        FlowResult result;
+        try { result = FlowSolver.Solve(g, spec, kind); }
+        catch (WeightNotInFieldException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
+        var solveSeconds = clock.Elapsed.TotalSeconds;
+        clock.Restart();
+        if (outPath is not null) SafeFile.WriteAllText(outPath, CertificateWriter.Write(result), graphPath);
+        var writeSeconds = clock.Elapsed.TotalSeconds;
+        if (json) WriteJson(stdout, result, parseSeconds, solveSeconds, writeSeconds);
+        else Summary.Write(stdout, graphPath, result, outPath);
+        return result.HasFlow ? ExitCode.Flow : ExitCode.NoFlow;
+    }
+
+    private static void WriteJson(TextWriter stdout, FlowResult r, double parse, double solve, double write)
+    {
+        using var w = new JsonTextWriter(stdout) { Formatting = Formatting.None, CloseOutput = false };
+        w.WriteStartObject();
+        w.WritePropertyName("verdict"); w.WriteValue(r.HasFlow ? "flow" : "noflow");
+        w.WritePropertyName("depth"); if (r.HasFlow) w.WriteValue(r.Depth); else w.WriteNull();
+        w.WritePropertyName("flow"); w.WriteValue(CertificateWriter.KindName(r.Kind));
+        w.WritePropertyName("field"); w.WriteValue(r.Field.Name);
+        w.WritePropertyName("nodes"); w.WriteValue(r.Graph.NodeCount);
+        w.WritePropertyName("edges"); w.WriteValue(r.Graph.Edges.Count);
+        w.WritePropertyName("measured"); w.WriteValue(r.Graph.NodeCount - r.Graph.Outputs.Count);
+        w.WritePropertyName("vanishedEdges"); w.WriteValue(r.VanishedEdges.Count);
+        w.WritePropertyName("blocked"); if (r.Obstruction is null) w.WriteNull(); else w.WriteValue(r.Obstruction.Nodes.Count);
+        w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(r.Graph));
+        w.WritePropertyName("seconds");
+        w.WriteStartObject();
+        w.WritePropertyName("parse"); w.WriteValue(Math.Round(parse, 6));
+        w.WritePropertyName("solve"); w.WriteValue(Math.Round(solve, 6));
+        w.WritePropertyName("write"); w.WriteValue(Math.Round(write, 6));
+        w.WriteEndObject();
+        w.WriteEndObject();
+        w.Flush();
+        stdout.WriteLine();
+    }
+}

@@ -1,0 +1,40 @@
+using FlowCert.Certificates;
+using FlowCert.Flows;
+
+namespace FlowCert.Cli;
+
+/// <summary>The short human-readable account of one solve.</summary>
+public static class Summary
+{
+    private const int MaxRoundsShown = 12, MaxNodesShown = 10;
+
+    public static void Write(TextWriter o, string source, FlowResult r, string? certificatePath)
+    {
+        var g = r.Graph;
+        string Names(IEnumerable<int> nodes)
+        {
+            var list = nodes.ToList();
+            var shown = string.Join(" ", list.Take(MaxNodesShown).Select(v => g.Names[v]));
+            return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
+        }
+        o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
+        o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
+        if (r.VanishedEdges.Count > 0)
+            o.WriteLine($"warning   {r.VanishedEdges.Count} edge(s) have weight 0 in {r.Field.Name} and vanish: " +
+                string.Join(", ", r.VanishedEdges.Take(MaxNodesShown).Select(e => $"{g.Names[e.U]}-{g.Names[e.V]} ({e.Weight})")));
+        if (r.Obstruction is { } blocked)
+        {
+            o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");
+            if (r.Kind == FlowKind.General) o.WriteLine($"          {blocked.Witnesses.Count} left-kernel witness(es) prove no node of it can be corrected");
+            else o.WriteLine("          every possible corrector touches zero or at least two of its nodes");
+        }
+        else
+        {
+            o.WriteLine($"verdict   flow of minimum depth {r.Depth}");
+            for (int i = 0; i < Math.Min(r.Depth, MaxRoundsShown); i++)
+                o.WriteLine($"round {i + 1,-3} {Names(r.Rounds[i])}");
+            if (r.Depth > MaxRoundsShown) o.WriteLine($"          ... {r.Depth - MaxRoundsShown} more rounds in the certificate");
+        }
+        o.WriteLine(certificatePath is null ? "certificate not written (use --out FILE)" : $"certificate {certificatePath}");
+    }
+}

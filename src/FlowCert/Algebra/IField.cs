@@ -1,0 +1,30 @@
+namespace FlowCert.Algebra;
+
+/// <summary>
+/// The operations of a field whose elements are values of type <typeparamref name="T"/>.
+/// Implementations are small readonly structs (a field descriptor, for example the prime of F_p), so
+/// that generic code constrained on <c>TField : struct, IField&lt;T&gt;</c> is specialised by the JIT and
+/// every operation has the same name over every field.
+/// </summary>
+public interface IField<T> where T : struct
+{
+    T Zero { get; }
+    T One { get; }
+    bool IsZero(T a);
+    bool AreEqual(T a, T b);
+    T Add(T a, T b);
+    T Subtract(T a, T b);
+    T Negate(T a);
+    T Multiply(T a, T b);
+    /// <summary>The multiplicative inverse; throws on zero.</summary>
+    T Inverse(T a);
+    /// <summary>The image of a rational; throws <see cref="NotInFieldException"/> when the denominator is not invertible.</summary>
+    T FromRational(Rational r);
+    /// <summary>Canonical text of an element (certificate form).</summary>
+    string Format(T a);
+    /// <summary>Parses the canonical text of an element; false when it is not canonical.</summary>
+    bool TryParse(string text, out T value);
+}
+
+/// <summary>A rational that has no image in the field (its denominator is divisible by p).</summary>
+public sealed class NotInFieldException(string message) : Exception(message);

@@ -1,0 +1,81 @@
+using System.Text;
+using FlowCert.Flows;
+using FlowCert.Graphs;
+
+namespace FlowCert.Certificates;
+
+/// <summary>
+/// Writes a <see cref="FlowResult"/> as a certificate (docs/formats.md): fixed key order, nodes in
+/// ordinal order, two-space indentation, LF line ends, so the same result gives the same bytes anywhere.
+/// </summary>
+public static class CertificateWriter
+{
+    public const string Format = "flowcert-certificate";
+    public const int Version = 1;
+    public const string ProducerName = "flowcert";
+    /// <summary>Written into every certificate; kept in step with the Version in Directory.Build.props.</summary>
+    public const string ProducerVersion = "0.1.0";
+
+    /// <summary>The name of a flow kind in certificates and on the command line.</summary>
+    public static string KindName(FlowKind kind) => kind == FlowKind.Causal ? "causal" : "general";
+
+    /// <summary>The certificate text.</summary>
+    public static string Write(FlowResult r)
+    {
+        var g = r.Graph;
+        string N(int v) => Quote(g.Names[v]);
+        string List(IEnumerable<int> nodes) => "[" + string.Join(", ", nodes.Select(N)) + "]";
+        string Vector(NodeVector v) => "{" + string.Join(", ", v.Entries.Select(e => $"{N(e.Node)}: {Quote(e.Value)}")) + "}";
+        static string Block(IEnumerable<string> lines, string indent, char open, char close)
+        {
+            var items = lines.ToList();
+            return items.Count == 0 ? $"{open}{close}" : $"{open}\n{string.Join(",\n", items.Select(l => indent + "  " + l))}\n{indent}{close}";
+        }
+
+        var sb = new StringBuilder();
+        sb.Append("{\n");
+        sb.Append($"  \"format\": {Quote(Format)},\n");
+        sb.Append($"  \"version\": {Version},\n");
+        sb.Append($"  \"flow\": {Quote(KindName(r.Kind))},\n");
+        sb.Append($"  \"field\": {Quote(r.Field.Name)},\n");
+        sb.Append($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
+        sb.Append("  \"graph\": {\n");
+        sb.Append($"    \"inputs\": {List(g.SortedInputs)},\n");
+        sb.Append($"    \"outputs\": {List(g.SortedOutputs)},\n");
+        sb.Append($"    \"nodes\": {List(Enumerable.Range(0, g.NodeCount))},\n");
+        sb.Append("    \"edges\": ").Append(Block(g.Edges.Select(e => $"[{N(e.U)}, {N(e.V)}, {Quote(e.Weight.ToString())}]"), "    ", '[', ']')).Append('\n');
+        sb.Append("  },\n");
+        if (r.Obstruction is null)
+        {
+            sb.Append("  \"verdict\": \"flow\",\n");
+            sb.Append($"  \"depth\": {r.Depth},\n");
+            sb.Append("  \"rounds\": ").Append(Block(r.Rounds.Select(List), "  ", '[', ']')).Append(",\n");
+            sb.Append("  \"corrections\": ").Append(Block(r.Corrections.OrderBy(kv => kv.Key).Select(kv => $"{N(kv.Key)}: {Vector(kv.Value)}"), "  ", '{', '}')).Append(",\n");
+        }
+        else
+        {
+            sb.Append("  \"verdict\": \"noflow\",\n");
+            sb.Append("  \"obstruction\": {\n");
+            sb.Append($"    \"blocked\": {List(r.Obstruction.Nodes)}");
+            if (r.Kind == FlowKind.General)
+                sb.Append(",\n    \"witnesses\": ").Append(Block(r.Obstruction.Witnesses.Select(Vector), "    ", '[', ']'));
+            sb.Append("\n  },\n");
+        }
+        sb.Append($"  \"producer\": {{\"name\": {Quote(ProducerName)}, \"version\": {Quote(ProducerVersion)}}}\n");
+        sb.Append("}\n");
+        return sb.ToString();
+    }
+
+    /// <summary>A JSON string literal (names and field elements are ASCII, but escape properly anyway).</summary>
+    private static string Quote(string s)
+    {
+        var sb = new StringBuilder(s.Length + 2).Append('"');
+        foreach (var c in s)
+        {
+            if (c == '"' || c == '\\') sb.Append('\\').Append(c);
+            else if (c < 0x20 || c > 0x7e) sb.Append($"\\u{(int)c:x4}");
+            else sb.Append(c);
+        }
+        return sb.Append('"').ToString();
+    }
+}

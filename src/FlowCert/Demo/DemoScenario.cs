@@ -1,0 +1,42 @@
+using System.Reflection;
+using FlowCert.Algebra;
+using FlowCert.Flows;
+using FlowCert.Graphs;
+
+namespace FlowCert.Demo;
+
+/// <summary>One design of the built-in demo and the analyses run on it.</summary>
+public sealed record DemoDesign(string Name, string Text, IReadOnlyList<FieldSpec> Fields)
+{
+    public OpenGraph Graph => OgraphReader.Parse(Text, Name + ".ograph");
+}
+
+/// <summary>
+/// The built-in demo: the fictional Merrow Reach lab's designs (a continuous-variable wire, a qutrit
+/// patch, a splitter whose flow depends on the field, and a merge that has no flow), each analysed
+/// over Q and small primes with both kinds of flow.
+/// </summary>
+public static class DemoScenario
+{
+    public static readonly FlowKind[] Kinds = [FlowKind.General, FlowKind.Causal];
+
+    public static IReadOnlyList<DemoDesign> Designs()
+    {
+        FieldSpec[] all = [FieldSpec.Rationals, FieldSpec.PrimeField(2), FieldSpec.PrimeField(3), FieldSpec.PrimeField(5)];
+        return
+        [
+            new("loop-wire", Resource("loop-wire"), all),
+            new("qutrit-patch", Resource("qutrit-patch"), all),
+            new("splitter-pair", Resource("splitter-pair"), all),
+            new("merge-attempt", Resource("merge-attempt"), all),
+        ];
+    }
+
+    private static string Resource(string name)
+    {
+        using var s = Assembly.GetExecutingAssembly().GetManifestResourceStream($"FlowCert.Demo.{name}.ograph")
+            ?? throw new InvalidOperationException($"demo resource {name} missing from the build");
+        using var r = new StreamReader(s);
+        return r.ReadToEnd();
+    }
+}

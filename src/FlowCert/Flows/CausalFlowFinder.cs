@@ -1,0 +1,36 @@
+using FlowCert.Algebra;
+
+namespace FlowCert.Flows;
+
+/// <summary>
+/// Causal flow of minimum depth (flows.md sections 4, 5, 6): a corrector with exactly one unprocessed
+/// neighbour v corrects v; every such v joins the next layer, corrected by its smallest such corrector u,
+/// with c_v = e_u / A[v][u]. When no corrector has exactly one unprocessed neighbour, the unprocessed
+/// set is blocked.
+/// </summary>
+internal static class CausalFlowFinder
+{
+    public static FlowResult Find<T, TField>(FieldGraph<T, TField> g)
+        where T : struct where TField : struct, IField<T>
+    {
+        var f = g.Field;
+        var state = new LayerState(g.Neighbours, g.Graph.Inputs, g.Graph.Outputs);
+        var corrections = new Dictionary<int, NodeVector>();
+        while (state.UnprocessedCount > 0)
+        {
+            var chosen = new SortedDictionary<int, int>();
+            foreach (var u in state.Active)
+            {
+                if (state.UnprocessedNeighbours[u] != 1) continue;
+                int v = Array.Find(g.Neighbours[u], w => !state.Processed[w]);
+                chosen.TryAdd(v, u); // Active is visited in increasing order: the first u is the smallest
+            }
+            if (chosen.Count == 0)
+                return GeneralFlowFinder.Result(g, state, corrections, new BlockedSet(state.Unprocessed(), []), FlowKind.Causal);
+            foreach (var (v, u) in chosen)
+                corrections[v] = GeneralFlowFinder.ToNodeVector(f, [u], [f.Inverse(g.Weight(v, u))]);
+            state.AddLayer(chosen.Keys.ToArray());
+        }
+        return GeneralFlowFinder.Result(g, state, corrections, null, FlowKind.Causal);
+    }
+}

@@ -1,0 +1,59 @@
+using FlowCert.Algebra;
+using FlowCert.Graphs;
+
+namespace FlowCert.Flows;
+
+/// <summary>A weight that has no value in the chosen field; names the edge.</summary>
+public sealed class WeightNotInFieldException(string message) : Exception(message);
+
+/// <summary>
+/// The adjacency of an open graph with its weights mapped into a field: sorted neighbour lists and
+/// their non-zero weights. Edges whose weight is zero in the field are left out and listed.
+/// </summary>
+public sealed class FieldGraph<T, TField> where T : struct where TField : struct, IField<T>
+{
+    public TField Field { get; }
+    public OpenGraph Graph { get; }
+    public FieldSpec Spec { get; }
+    public int[][] Neighbours { get; }
+    public T[][] Weights { get; }
+    public IReadOnlyList<WeightedEdge> Vanished { get; }
+
+    public FieldGraph(OpenGraph graph, TField field, FieldSpec spec)
+    {
+        Graph = graph; Field = field; Spec = spec;
+        int n = graph.NodeCount;
+        var nb = new List<(int, T)>[n];
+        for (int i = 0; i < n; i++) nb[i] = [];
+        var vanished = new List<WeightedEdge>();
+        foreach (var e in graph.Edges)
+        {
+            T w;
+            try { w = field.FromRational(e.Weight); }
+            catch (NotInFieldException)
+            {
+                throw new WeightNotInFieldException(
+                    $"edge {graph.Names[e.U]} {graph.Names[e.V]} has weight {e.Weight}, which has no value in {spec.Name}: {spec.Prime} divides its denominator");
+            }
+            if (field.IsZero(w)) { vanished.Add(e); continue; }
+            nb[e.U].Add((e.V, w));
+            nb[e.V].Add((e.U, w));
+        }
+        Neighbours = new int[n][];
+        Weights = new T[n][];
+        for (int i = 0; i < n; i++)
+        {
+            nb[i].Sort((a, b) => a.Item1.CompareTo(b.Item1));
+            Neighbours[i] = nb[i].Select(x => x.Item1).ToArray();
+            Weights[i] = nb[i].Select(x => x.Item2).ToArray();
+        }
+        Vanished = vanished;
+    }
+
+    /// <summary>A[u][v] in the field (zero when not adjacent).</summary>
+    public T Weight(int u, int v)
+    {
+        int k = Array.BinarySearch(Neighbours[u], v);
+        return k >= 0 ? Weights[u][k] : Field.Zero;
+    }
+}

@@ -1,0 +1,39 @@
+using FlowCert.Algebra;
+using FlowCert.Graphs;
+
+namespace FlowCert.Flows;
+
+/// <summary>Which flow condition is asked for (flows.md sections 3 and 4).</summary>
+public enum FlowKind
+{
+    /// <summary>Generalized flow: correction vectors with any support.</summary>
+    General,
+    /// <summary>Causal flow: one corrector per measured node.</summary>
+    Causal,
+}
+
+/// <summary>A sparse vector over nodes with canonical field-element text, entries sorted by node index.</summary>
+public sealed record NodeVector(IReadOnlyList<(int Node, string Value)> Entries);
+
+/// <summary>A proof that no flow exists: a blocked set and, for generalized flow, left-kernel witnesses.</summary>
+public sealed record BlockedSet(IReadOnlyList<int> Nodes, IReadOnlyList<NodeVector> Witnesses);
+
+/// <summary>The outcome of a flow search: a schedule with correction vectors, or an obstruction.</summary>
+public sealed record FlowResult
+{
+    public required OpenGraph Graph { get; init; }
+    public required FieldSpec Field { get; init; }
+    public required FlowKind Kind { get; init; }
+    /// <summary>Measured nodes by round, round 1 first, each round sorted; empty when there is no flow.</summary>
+    public required IReadOnlyList<IReadOnlyList<int>> Rounds { get; init; }
+    /// <summary>The correction vector c_v of every measured node v (empty when there is no flow).</summary>
+    public required IReadOnlyDictionary<int, NodeVector> Corrections { get; init; }
+    /// <summary>The proof of absence, or null when a flow exists.</summary>
+    public required BlockedSet? Obstruction { get; init; }
+    /// <summary>Edges whose weight is zero in the chosen field (they vanish there).</summary>
+    public required IReadOnlyList<WeightedEdge> VanishedEdges { get; init; }
+
+    public bool HasFlow => Obstruction is null;
+    /// <summary>The number of rounds (minimal among flows of this kind over this field).</summary>
+    public int Depth => Rounds.Count;
+}

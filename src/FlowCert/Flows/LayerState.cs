@@ -1,0 +1,64 @@
+namespace FlowCert.Flows;
+
+/// <summary>
+/// Book-keeping shared by both flow searches of the maximally delayed construction (flows.md section 5):
+/// which nodes are processed, which processed nodes may correct (non-inputs), and for each corrector how
+/// many unprocessed neighbours it still has. Correctors with none are dropped from the active set, so
+/// each layer touches only the frontier.
+/// </summary>
+internal sealed class LayerState
+{
+    private readonly int[][] neighbours;
+    private readonly bool[] isInput;
+    public bool[] Processed { get; }
+    public bool[] IsCorrector { get; }
+    /// <summary>For a corrector: its number of unprocessed neighbours.</summary>
+    public int[] UnprocessedNeighbours { get; }
+    /// <summary>Correctors with at least one unprocessed neighbour.</summary>
+    public SortedSet<int> Active { get; } = [];
+    public int UnprocessedCount { get; private set; }
+    public List<int[]> Layers { get; } = [];
+
+    public LayerState(int[][] neighbours, IReadOnlySet<int> inputs, IReadOnlySet<int> outputs)
+    {
+        this.neighbours = neighbours;
+        int n = neighbours.Length;
+        isInput = new bool[n];
+        foreach (var i in inputs) isInput[i] = true;
+        Processed = new bool[n];
+        IsCorrector = new bool[n];
+        UnprocessedNeighbours = new int[n];
+        foreach (var o in outputs) Processed[o] = true;
+        UnprocessedCount = n - outputs.Count;
+        foreach (var o in outputs.Order()) Promote(o);
+    }
+
+    private void Promote(int v)
+    {
+        if (isInput[v]) return;
+        IsCorrector[v] = true;
+        int count = 0;
+        foreach (var w in neighbours[v]) if (!Processed[w]) count++;
+        UnprocessedNeighbours[v] = count;
+        if (count > 0) Active.Add(v);
+    }
+
+    /// <summary>Marks a layer processed and updates the counts of the correctors around it.</summary>
+    public void AddLayer(int[] layer)
+    {
+        Layers.Add(layer);
+        foreach (var v in layer) Processed[v] = true;
+        UnprocessedCount -= layer.Length;
+        foreach (var v in layer)
+            foreach (var w in neighbours[v])
+                if (IsCorrector[w] && --UnprocessedNeighbours[w] == 0) Active.Remove(w);
+        foreach (var v in layer) Promote(v);
+    }
+
+    /// <summary>The unprocessed nodes, sorted.</summary>
+    public int[] Unprocessed() => Enumerable.Range(0, Processed.Length).Where(v => !Processed[v]).ToArray();
+
+    /// <summary>The rounds: layers in reverse, so the first layer found is measured last.</summary>
+    public IReadOnlyList<IReadOnlyList<int>> Rounds()
+        => Enumerable.Reverse(Layers).Select(l => (IReadOnlyList<int>)l).ToList();
+}
