@@ -60,8 +60,13 @@ public static class Support
     public static Result CheckText(string certText, string? ograph = null)
     {
         var certPath = Write(certText, ".json");
-        if (ograph is null) return Run(certPath);
-        return Run(certPath, "--graph", Write(ograph, ".ograph"));
+        var graphPath = ograph is null ? null : Write(ograph, ".ograph");
+        try { return graphPath is null ? Run(certPath) : Run(certPath, "--graph", graphPath); }
+        finally
+        {
+            File.Delete(certPath);
+            if (graphPath is not null) File.Delete(graphPath);
+        }
     }
 
     public static string Write(string text, string extension)
