@@ -34,7 +34,7 @@ internal static class GeneralFlowFinder
                     if (state.IsCorrector[nb[k]]) { idx.Add(nb[k]); val.Add(wt[k]); }
                 matrix[r] = new SparseVector<T>(idx.ToArray(), val.ToArray());
             }
-            var elimination = new SparseElimination<T, TField>(f, matrix);
+            var elimination = Elimination.Run(f, matrix);
             var solutions = elimination.SolveUnitVectors();
             if (solutions.Count == 0)
                 return Result(g, state, corrections, Obstruction(g, state.Unprocessed(), rows, elimination));
@@ -46,7 +46,7 @@ internal static class GeneralFlowFinder
         return Result(g, state, corrections, null);
     }
 
-    private static BlockedSet Obstruction<T, TField>(FieldGraph<T, TField> g, int[] blocked, int[] rows, SparseElimination<T, TField> elimination)
+    private static BlockedSet Obstruction<T, TField>(FieldGraph<T, TField> g, int[] blocked, int[] rows, IEliminationResult<T> elimination)
         where T : struct where TField : struct, IField<T>
     {
         var f = g.Field;

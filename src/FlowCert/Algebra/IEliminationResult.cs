@@ -1,0 +1,26 @@
+namespace FlowCert.Algebra;
+
+/// <summary>
+/// What an elimination of a matrix B (rows 0..m-1, columns by id) tells the flow search: a basis of the
+/// left kernel, and for every row r with e_r in the column space of B the canonical solution of
+/// B c = e_r: the one that is zero off the greedy column basis taken in increasing column id. That
+/// solution is unique, so every implementation returns the same vectors.
+/// </summary>
+public interface IEliminationResult<T> where T : struct
+{
+    int Rank { get; }
+    IReadOnlyList<SparseVector<T>> LeftKernel();
+    Dictionary<int, SparseVector<T>> SolveUnitVectors();
+}
+
+/// <summary>Chooses how to eliminate a block: sparse rows in general, packed bits for dense blocks over F_2.</summary>
+public static class Elimination
+{
+    public static IEliminationResult<T> Run<T, TField>(TField field, IReadOnlyList<SparseVector<T>> rows)
+        where T : struct where TField : struct, IField<T>
+    {
+        if (field is PrimeField { P: 2 } && typeof(T) == typeof(ulong) && BitElimination.PaysOff(rows.Select(r => r.Indices).ToList()))
+            return (IEliminationResult<T>)(object)new BitElimination(rows.Select(r => r.Indices).ToList());
+        return new SparseElimination<T, TField>(field, rows);
+    }
+}
