@@ -1,7 +1,10 @@
 using System.CommandLine;
 using FlowCert.Algebra;
 using FlowCert.Flows;
+using FlowCert.Certificates;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Families;
+using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
 
@@ -22,6 +25,11 @@ public static class CliApp
         var root = new RootCommand("flowcert: exact flows for measurement-based quantum computing on weighted graph states");
         root.Subcommands.Add(SolveCommand.Create(stdout));
         root.Subcommands.Add(DemoCommand.Create(stdout));
+        root.Subcommands.Add(ScheduleCommand.Create(stdout));
+        root.Subcommands.Add(SimulateCommand.Create(stdout, stderr));
+        root.Subcommands.Add(GenerateCommand.Create(stdout));
+        root.Subcommands.Add(ConvertCommand.Create(stdout));
+        root.Subcommands.Add(DrawCommand.Create(stdout));
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {
@@ -33,7 +41,8 @@ public static class CliApp
         {
             return parsed.Invoke(new InvocationConfiguration { Output = stdout, Error = stderr, EnableDefaultExceptionHandler = false });
         }
-        catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException)
+        catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException
+            or GraphFileException or FamilyParameterException or CertificateFormatException)
         {
             stderr.WriteLine($"flowcert: {e.Message}");
             return ExitCode.BadInput;
@@ -48,6 +57,12 @@ public static class CliApp
             stderr.WriteLine($"flowcert: internal error: {e}");
             return ExitCode.Internal;
         }
+    }
+
+    /// <summary>Refuses an empty path (the file APIs would throw an ArgumentException, reported as an internal error).</summary>
+    public static void RequirePath(string path, string what)
+    {
+        if (string.IsNullOrEmpty(path)) throw new UserInputException($"{what} is empty: give a file or folder name.");
     }
 
     /// <summary>Parses --flow.</summary>

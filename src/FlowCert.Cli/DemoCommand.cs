@@ -18,6 +18,7 @@ public static class DemoCommand
 
     public static int Execute(string outDir, TextWriter o)
     {
+        CliApp.RequirePath(outDir, "--out-dir");
         Directory.CreateDirectory(outDir);
         o.WriteLine("Merrow Reach lab (a fictional team): which of this week's designs run deterministically?");
         o.WriteLine();

@@ -4,6 +4,7 @@ using FlowCert.Algebra;
 using FlowCert.Certificates;
 using FlowCert.Flows;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
 using Newtonsoft.Json;
 
 namespace FlowCert.Cli;
@@ -13,22 +14,27 @@ public static class SolveCommand
 {
     public static Command Create(TextWriter stdout)
     {
-        var graph = new Argument<string>("GRAPH") { Description = "the open graph (.ograph)" };
+        var graph = new Argument<string>("GRAPH") { Description = "the open graph: .ograph, .g6, .s6, .mtx or .json" };
+        var inputs = ConvertCommand.InputsOption();
+        var outputs = ConvertCommand.OutputsOption();
         var field = new Option<string>("--field") { Description = "Q (rationals, continuous variables) or a prime p (qudits of dimension p)", DefaultValueFactory = _ => "Q" };
         var flow = new Option<string>("--flow") { Description = "general or causal", DefaultValueFactory = _ => "general" };
         var output = new Option<string?>("--out") { Description = "write the certificate (JSON) to this file" };
         var json = new Option<bool>("--json") { Description = "print one JSON object instead of the summary" };
-        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout));
+        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs)));
         return cmd;
     }
 
-    public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout)
+    public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout,
+        string? inputs = null, string? outputs = null)
     {
+        CliApp.RequirePath(graphPath, "the graph file");
+        if (outPath is not null) CliApp.RequirePath(outPath, "--out");
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
-        var g = OgraphReader.ReadFile(graphPath);
+        var g = GraphFiles.Read(graphPath, inputs, outputs);
         var parseSeconds = clock.Elapsed.TotalSeconds;
         clock.Restart();
         FlowResult result;
@@ -54,7 +60,15 @@ public static class SolveCommand
         w.WritePropertyName("nodes"); w.WriteValue(r.Graph.NodeCount);
         w.WritePropertyName("edges"); w.WriteValue(r.Graph.Edges.Count);
         w.WritePropertyName("measured"); w.WriteValue(r.Graph.NodeCount - r.Graph.Outputs.Count);
-        w.WritePropertyName("vanishedEdges"); w.WriteValue(r.VanishedEdges.Count);
+        w.WritePropertyName("vanishedEdges");
+        w.WriteStartArray();
+        foreach (var e in r.VanishedEdges)
+        {
+            w.WriteStartArray();
+            w.WriteValue(r.Graph.Names[e.U]); w.WriteValue(r.Graph.Names[e.V]); w.WriteValue(e.Weight.ToString());
+            w.WriteEndArray();
+        }
+        w.WriteEndArray();
         w.WritePropertyName("blocked"); if (r.Obstruction is null) w.WriteNull(); else w.WriteValue(r.Obstruction.Nodes.Count);
         w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(r.Graph));
         w.WritePropertyName("seconds");

@@ -67,7 +67,7 @@ public static class CertificateWriter
     }
 
     /// <summary>A JSON string literal (names and field elements are ASCII, but escape properly anyway).</summary>
-    private static string Quote(string s)
+    internal static string Quote(string s)
     {
         var sb = new StringBuilder(s.Length + 2).Append('"');
         foreach (var c in s)

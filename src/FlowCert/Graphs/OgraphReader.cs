@@ -9,7 +9,7 @@ public static partial class OgraphReader
 {
     [GeneratedRegex(@"^[A-Za-z_][A-Za-z0-9_.:\-]*$")]
     private static partial Regex NamePattern();
-    [GeneratedRegex(@"^-?[0-9]+(\.[0-9]+)?$")]
+    [GeneratedRegex(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?$")]
     private static partial Regex CoordinatePattern();
 
     /// <summary>True when the text is a valid node name.</summary>
@@ -96,7 +96,7 @@ public static partial class OgraphReader
                     {
                         var t = tokens[2 + k];
                         if (!CoordinatePattern().IsMatch(t.Text) || !decimal.TryParse(t.Text, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture, out coords[k]))
-                            throw Error(t, $"bad coordinate '{t.Text}': write a decimal such as 2 or -1.5");
+                            throw Error(t, $"bad coordinate '{t.Text}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
                     }
                     references.Add((n, lineNo, tokens[1].Column, "at"));
                     positions[n] = new PositionHint(coords[0], coords[1]);

@@ -1,0 +1,47 @@
+using System.CommandLine;
+using FlowCert.Certificates;
+using FlowCert.Drawing;
+using FlowCert.Flows;
+using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
+
+namespace FlowCert.Cli;
+
+/// <summary><c>flowcert draw GRAPH [--cert CERT] --out FILE.svg|FILE.dot</c>: a picture of a graph, its flow or its blocked set.</summary>
+public static class DrawCommand
+{
+    public static Command Create(TextWriter stdout)
+    {
+        var graph = new Argument<string>("GRAPH") { Description = "the graph: .ograph, .g6, .s6, .mtx or .json" };
+        var cert = new Option<string?>("--cert") { Description = "a certificate of this graph: draw its rounds and corrections, or its blocked set" };
+        var inputs = ConvertCommand.InputsOption();
+        var outputs = ConvertCommand.OutputsOption();
+        var output = new Option<string>("--out") { Description = "the picture to write: .svg, or .dot for Graphviz", Required = true };
+        var cmd = new Command("draw", "Draw a graph, and with a certificate its flow or proof of absence, as SVG or DOT") { graph, cert, inputs, outputs, output };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(cert), p.GetValue(inputs), p.GetValue(outputs), p.GetValue(output)!, stdout));
+        return cmd;
+    }
+
+    public static int Execute(string graphPath, string? certPath, string? inputs, string? outputs, string outPath, TextWriter stdout)
+    {
+        var extension = Path.GetExtension(outPath).ToLowerInvariant();
+        if (extension is not (".svg" or ".dot"))
+            throw new UserInputException($"{outPath}: a picture is written as .svg or .dot");
+        var g = GraphFiles.Read(graphPath, inputs, outputs);
+        FlowResult? result = null;
+        if (certPath is not null)
+        {
+            result = CertificateReader.ReadFile(certPath);
+            if (CanonicalForm.Sha256(result.Graph) != CanonicalForm.Sha256(g))
+                throw new UserInputException($"{certPath} is a certificate of another graph than {graphPath} (their canonical forms differ)");
+            result = result with { Graph = g };
+        }
+        var title = FlowPicture.TitleFor(Path.GetFileName(graphPath), result);
+        var text = extension == ".svg"
+            ? SvgPicture.Write(PictureLayout.Arrange(g, result, title))
+            : DotPicture.Write(g, result, title);
+        SafeFile.WriteAllText(outPath, text, [graphPath, .. certPath is null ? Array.Empty<string>() : [certPath]]);
+        stdout.WriteLine($"wrote {outPath}");
+        return ExitCode.Flow;
+    }
+}

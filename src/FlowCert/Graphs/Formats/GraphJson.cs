@@ -1,0 +1,136 @@
+using System.Text;
+using FlowCert.Algebra;
+using FlowCert.Certificates;
+using Newtonsoft.Json;
+using Newtonsoft.Json.Linq;
+
+namespace FlowCert.Graphs.Formats;
+
+/// <summary>
+/// The JSON form of a graph: exactly a certificate's <c>"graph"</c> object (docs/formats.md) on its own,
+/// with keys <c>inputs</c>, <c>outputs</c>, <c>nodes</c>, <c>edges</c>, two-space indentation and LF
+/// line ends. The reader accepts the keys in any order and lists in any order, and checks what the
+/// <c>.ograph</c> reader checks, naming the line and column of the first problem.
+/// </summary>
+public static class GraphJson
+{
+    /// <summary>The keys of the object, in the order written.</summary>
+    public static readonly string[] Keys = ["inputs", "outputs", "nodes", "edges"];
+
+    public static string Write(OpenGraph g)
+    {
+        string N(int v) => CertificateWriter.Quote(g.Names[v]);
+        string List(IEnumerable<int> nodes) => "[" + string.Join(", ", nodes.Select(N)) + "]";
+        var sb = new StringBuilder("{\n");
+        sb.Append($"  \"inputs\": {List(g.SortedInputs)},\n");
+        sb.Append($"  \"outputs\": {List(g.SortedOutputs)},\n");
+        sb.Append($"  \"nodes\": {List(Enumerable.Range(0, g.NodeCount))},\n");
+        sb.Append("  \"edges\": ");
+        if (g.Edges.Count == 0) sb.Append("[]");
+        else
+            sb.Append("[\n")
+              .Append(string.Join(",\n", g.Edges.Select(e => $"    [{N(e.U)}, {N(e.V)}, {CertificateWriter.Quote(e.Weight.ToString())}]")))
+              .Append("\n  ]");
+        return sb.Append("\n}\n").ToString();
+    }
+
+    public static OpenGraph Parse(string text, string fileName)
+    {
+        var lines = text.Split('\n');
+        GraphFormatException At(JToken t, string problem)
+        {
+            var info = (IJsonLineInfo)t;
+            return info.HasLineInfo()
+                ? new GraphFormatException(fileName, info.LineNumber, StartColumn(lines, t, info), problem)
+                : new GraphFormatException(fileName, 1, 1, problem);
+        }
+        JToken root;
+        try
+        {
+            using var reader = new JsonTextReader(new StringReader(text)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
+            root = JToken.ReadFrom(reader, new JsonLoadSettings { DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error, LineInfoHandling = LineInfoHandling.Load });
+            if (reader.Read() && reader.TokenType != JsonToken.Comment)
+                throw new GraphFormatException(fileName, reader.LineNumber, reader.LinePosition, "text after the graph object");
+        }
+        catch (JsonReaderException e)
+        {
+            throw new GraphFormatException(fileName, Math.Max(e.LineNumber, 1), Math.Max(e.LinePosition, 1), e.Message.Split(" Path")[0].TrimEnd('.'));
+        }
+        if (root is not JObject obj) throw At(root, "a graph JSON file holds one object with keys inputs, outputs, nodes and edges");
+        foreach (var p in obj.Properties())
+            if (!Keys.Contains(p.Name))
+                throw At(p, $"unknown key '{p.Name}': a graph object has exactly inputs, outputs, nodes and edges");
+        foreach (var k in Keys)
+            if (obj[k] is null) throw At(obj, $"key '{k}' is missing: a graph object has exactly inputs, outputs, nodes and edges");
+
+        JArray Array(JToken t, string what) => t as JArray ?? throw At(t, $"{what} must be a list");
+        string Name(JToken t, string what)
+        {
+            if (t.Type != JTokenType.String) throw At(t, $"{what} must be a string");
+            var s = (string)t!;
+            if (!OgraphReader.IsValidName(s))
+                throw At(t, $"bad node name '{s}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
+            return s;
+        }
+        var nodes = new List<string>();
+        var known = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var t in Array(obj["nodes"]!, "nodes"))
+        {
+            var n = Name(t, "a node");
+            if (!known.Add(n)) throw At(t, $"node {n} is listed twice in nodes");
+            nodes.Add(n);
+        }
+        string Known(JToken t, string what)
+        {
+            var n = Name(t, what);
+            return known.Contains(n) ? n : throw At(t, $"unknown node {n} in {what}: list it in nodes");
+        }
+        List<string> Terminals(string key)
+        {
+            var list = new List<string>();
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var t in Array(obj[key]!, key))
+            {
+                var n = Known(t, key);
+                if (!seen.Add(n)) throw At(t, $"node {n} is listed twice in {key}");
+                list.Add(n);
+            }
+            return list;
+        }
+        var inputs = Terminals("inputs");
+        var outputs = Terminals("outputs");
+        var edges = new List<(string, string, Rational)>();
+        var pairs = new HashSet<(string, string)>();
+        foreach (var t in Array(obj["edges"]!, "edges"))
+        {
+            if (t is not JArray { Count: 3 } triple) throw At(t, "an edge is [\"u\", \"v\", \"weight\"]");
+            var (u, v) = (Known(triple[0], "an edge"), Known(triple[1], "an edge"));
+            if (u == v) throw At(triple[1], $"self-loop on node {u}: a graph state has no edge from a node to itself");
+            if (triple[2].Type != JTokenType.String || !Rational.TryParse((string)triple[2]!, out var w))
+                throw At(triple[2], "bad weight: write a string holding an integer, a/b or a decimal such as \"0.25\"");
+            if (w.IsZero) throw At(triple[2], $"weight of edge {u} {v} is zero: leave the edge out instead");
+            if (!pairs.Add(string.CompareOrdinal(u, v) < 0 ? (u, v) : (v, u))) throw At(t, $"edge {u} {v} appears twice");
+            edges.Add((u, v, w));
+        }
+        return new OpenGraph(nodes, edges, inputs, outputs);
+    }
+
+    /// <summary>
+    /// Json.NET places a token at its end; a message is clearer at its start. For a string value, walk back
+    /// to its opening quote; for a property, to the quote of its name; otherwise keep the reported column.
+    /// </summary>
+    private static int StartColumn(string[] lines, JToken t, IJsonLineInfo info)
+    {
+        int line = info.LineNumber - 1, end = info.LinePosition;
+        if (line < 0 || line >= lines.Length) return Math.Max(end, 1);
+        var text = lines[line];
+        if (t is JProperty) end = text.LastIndexOf(':', Math.Min(end, text.Length) - 1) + 1;
+        if (t.Type == JTokenType.String || t is JProperty)
+        {
+            int close = text.LastIndexOf('"', Math.Clamp(end - 1, 0, text.Length - 1));
+            for (int i = close - 1; i >= 0; i--)
+                if (text[i] == '"' && (i == 0 || text[i - 1] != '\\')) return i + 1;
+        }
+        return Math.Max(end, 1);
+    }
+}

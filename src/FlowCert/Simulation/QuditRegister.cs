@@ -1,0 +1,103 @@
+using System.Numerics;
+using MathNet.Numerics.LinearAlgebra;
+
+namespace FlowCert.Simulation;
+
+/// <summary>
+/// A state vector over labelled qudits of one prime dimension p. The qudit at position k has stride p^k.
+/// Labels are node indices for graph qudits and negative numbers for reference qudits.
+/// </summary>
+public sealed class QuditRegister
+{
+    public int Dimension { get; }
+    public IReadOnlyList<int> Labels { get; }
+    public Complex[] Amplitudes { get; }
+
+    public QuditRegister(int dimension, IReadOnlyList<int> labels, Complex[] amplitudes)
+    {
+        long size = 1;
+        foreach (var _ in labels) size *= dimension;
+        if (amplitudes.Length != size) throw new ArgumentException($"{labels.Count} qudits of dimension {dimension} need {size} amplitudes, not {amplitudes.Length}");
+        Dimension = dimension; Labels = labels; Amplitudes = amplitudes;
+    }
+
+    private int Position(int label)
+    {
+        for (int k = 0; k < Labels.Count; k++) if (Labels[k] == label) return k;
+        throw new ArgumentException($"no qudit labelled {label} in the register");
+    }
+
+    private int Stride(int position)
+    {
+        int s = 1;
+        for (int k = 0; k < position; k++) s *= Dimension;
+        return s;
+    }
+
+    /// <summary>
+    /// Contracts one qudit with a bra (sum_x bra[x] psi[.., x, ..]) and removes it: the unnormalized state
+    /// of the other qudits after the outcome whose basis vector has coefficients conj(bra).
+    /// </summary>
+    public QuditRegister Project(int label, IReadOnlyList<Complex> bra)
+    {
+        int p = Dimension, k = Position(label), stride = Stride(k);
+        int outer = Amplitudes.Length / (stride * p);
+        var result = new Complex[Amplitudes.Length / p];
+        for (int hi = 0; hi < outer; hi++)
+        {
+            int source = hi * stride * p, target = hi * stride;
+            for (int x = 0; x < p; x++)
+            {
+                var coefficient = bra[x];
+                int from = source + x * stride;
+                for (int lo = 0; lo < stride; lo++) result[target + lo] += coefficient * Amplitudes[from + lo];
+            }
+        }
+        var labels = Labels.Where((_, i) => i != k).ToArray();
+        return new QuditRegister(p, labels, result);
+    }
+
+    /// <summary>Applies a p x p matrix to one qudit, in place.</summary>
+    public void Apply(int label, Matrix<Complex> gate)
+    {
+        int p = Dimension, stride = Stride(Position(label));
+        int outer = Amplitudes.Length / (stride * p);
+        var column = new Complex[p];
+        for (int hi = 0; hi < outer; hi++)
+            for (int lo = 0; lo < stride; lo++)
+            {
+                int start = hi * stride * p + lo;
+                for (int x = 0; x < p; x++) column[x] = Amplitudes[start + x * stride];
+                for (int y = 0; y < p; y++)
+                {
+                    Complex s = Complex.Zero;
+                    for (int x = 0; x < p; x++) s += gate[y, x] * column[x];
+                    Amplitudes[start + y * stride] = s;
+                }
+            }
+    }
+
+    /// <summary>
+    /// The register as a matrix M[r, c] = amplitude with the row qudits in basis state r and the column
+    /// qudits in c; r and c are read with the first listed qudit most significant. The two lists must
+    /// together name every qudit once.
+    /// </summary>
+    public Matrix<Complex> ToMatrix(IReadOnlyList<int> rowLabels, IReadOnlyList<int> columnLabels)
+    {
+        if (rowLabels.Count + columnLabels.Count != Labels.Count || !rowLabels.Concat(columnLabels).All(Labels.Contains))
+            throw new ArgumentException("rows and columns must name every qudit of the register once");
+        int[] Offsets(IReadOnlyList<int> labels)
+        {
+            var offsets = new int[] { 0 };
+            foreach (var label in labels)
+            {
+                int stride = Stride(Position(label));
+                offsets = offsets.SelectMany(o => Enumerable.Range(0, Dimension).Select(x => o + x * stride)).ToArray();
+            }
+            return offsets;
+        }
+        var rows = Offsets(rowLabels);
+        var columns = Offsets(columnLabels);
+        return Matrix<Complex>.Build.Dense(rows.Length, columns.Length, (r, c) => Amplitudes[rows[r] + columns[c]]);
+    }
+}
