@@ -40,7 +40,8 @@ public sealed class FlowClaim(FieldGraph g, bool causal)
     /// <summary>An output, or a measured node in a strictly later round.</summary>
     bool IsLater(string u, string v) => g.Outputs.Contains(u) || round[u] > round[v];
 
-    string Position(string u) => g.Outputs.Contains(u) ? "an output" : $"in round {round[u]}";
+    /// <summary>Where a node that is not later than another sits (never an output: outputs are always later).</summary>
+    string Position(string u) => $"in round {round[u]}";
 
     void CheckCorrection(string v, JToken token)
     {

@@ -5,7 +5,7 @@ namespace FlowCheck;
 /// <summary>Reads the .ograph text format of docs/formats.md into a sorted <see cref="OpenGraph"/>.</summary>
 public static class OgraphReader
 {
-    static readonly Regex Coordinate = new(@"^-?[0-9]+(\.[0-9]+)?\z");
+    static readonly Regex Coordinate = new(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?\z");
 
     public static OpenGraph Read(string path)
     {

@@ -115,6 +115,15 @@ public class FlowRuleTests
     }
 
     [Fact]
+    public void FirstFailingNodeIsTheFirstInOrdinalOrder()
+    {
+        // a, b, d all adjacent to the output x and measured together: c_a = x touches both b and d; b is named.
+        var cert = Cert("general", "Q", "{'inputs':[],'outputs':['x'],'nodes':['a','b','d','x'],'edges':[['a','x','1'],['b','x','1'],['d','x','1']]}",
+            "'verdict':'flow','depth':1,'rounds':[['a','b','d']],'corrections':{'a':{'x':'1'},'b':{'x':'1'},'d':{'x':'1'}}");
+        AssertInvalid(cert, "invalid: node a (round 1): (A c_a)(b) = 1 is non-zero but b is in round 1, not later");
+    }
+
+    [Fact]
     public void OutputsAreAlwaysLater()
     {
         // (A c_a)(c) = -1/4 on the output c of the weighted wire is fine.

@@ -64,6 +64,15 @@ public class NoFlowRuleTests
         AssertInvalid(WithObstruction(Examples.FanGeneralNoFlow(), obstruction), "invalid: " + message);
 
     [Fact]
+    public void FirstFailingCorrectorIsTheFirstInOrdinalOrder()
+    {
+        // a is adjacent to the outputs o and p; the witness y = e_a has (y^T A)(o) = (y^T A)(p) = 1; o is named.
+        var cert = Cert("general", "Q", "{'inputs':[],'outputs':['o','p'],'nodes':['a','o','p'],'edges':[['a','o','1'],['a','p','1']]}",
+            "'verdict':'noflow','obstruction':{'blocked':['a'],'witnesses':[{'a':'1'}]}");
+        AssertInvalid(cert, "invalid: obstruction.witnesses[0]: (y^T A)(o) = 1 for corrector o, not 0");
+    }
+
+    [Fact]
     public void WitnessesMayBeSeveralAndScaled()
     {
         var cert = WithObstruction(Examples.FanGeneralNoFlow(), "{'blocked':['a','b'],'witnesses':[{'a':'-2/3','b':'2/3'},{'a':'5','b':'-5'}]}");

@@ -57,9 +57,18 @@ public class OgraphReaderTests
     [InlineData("edge a b\nat a 0\n", "2:1: wrong number of tokens: at NODE X Y")]
     [InlineData("edge a b\nat a 0 x\n", "2:8: bad coordinate \"x\"")]
     [InlineData("edge a b\nat a 1. 0\n", "2:6: bad coordinate \"1.\"")]
+    [InlineData("edge a b\nat a 1234567890 0\n", "2:6: bad coordinate \"1234567890\"")]
+    [InlineData("edge a b\nat a 0 0.1234567890\n", "2:8: bad coordinate \"0.1234567890\"")]
     [InlineData("edge a b\nplane a XY\n", "2:1: plane is reserved for a later version")]
     [InlineData("edge a b\t2 # ok\nedge\ta\tc\t1/2/3\n", "2:10: bad or zero weight \"1/2/3\"")]
     public void ErrorsNameLineAndColumn(string text, string message) => Assert.Equal(message, Error(text));
+
+    [Fact]
+    public void CoordinatesHaveAtMostNineDigitsEachSide()
+    {
+        var g = Read("edge a b\nat a -123456789.123456789 987654321\n");
+        Assert.Equal("input\noutput\nedge a b 1\n", g.Canonical());
+    }
 
     [Fact]
     public void InputAndOutputMayOverlap()
