@@ -8,7 +8,7 @@ public static class Prime
     static readonly int[] Bases = [2, 3, 5, 7, 11, 13, 17, 19, 23, 29, 31, 37, 41];
 
     /// <summary>The least strong pseudoprime to all of <see cref="Bases"/> ("Strong pseudoprimes to twelve
-    /// prime bases", arXiv:1509.00864); below it the test is exact.</summary>
+    /// prime bases", arXiv:1509.00864; the value from memory, as commonly used); below it the test is exact.</summary>
     public static readonly BigInteger Limit = BigInteger.Parse("3317044064679887385961981");
 
     public static bool IsPrime(BigInteger n)

@@ -120,7 +120,9 @@ public class ArithmeticTests
         }
         Assert.False(Prime.IsPrime(561));
         Assert.False(Prime.IsPrime(3215031751));
-        Assert.False(Prime.IsPrime(BigInteger.Parse("318665857834031151167461")));
+        var psi12 = BigInteger.Parse("318665857834031151167461");
+        Assert.Equal(BigInteger.Parse("399165290221") * BigInteger.Parse("798330580441"), psi12);
+        Assert.False(Prime.IsPrime(psi12));
         Assert.True(Prime.IsPrime(2147483647));
         Assert.True(Prime.IsPrime(BigInteger.Parse("18446744073709551557")));
         Assert.False(Prime.IsPrime(BigInteger.Parse("18446744073709551557") * 3));

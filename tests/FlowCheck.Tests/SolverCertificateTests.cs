@@ -25,6 +25,18 @@ public class SolverCertificateTests
     }
 
     [Fact]
+    public void LargePrimeFieldCertificatesAreAccepted()
+    {
+        var all = SolverCertificates.DemoOverLargePrime().ToList();
+        Assert.NotEmpty(all);
+        foreach (var p in all)
+        {
+            Assert.Contains("\"field\": \"F2305843009213693951\"", p.Json);
+            AssertAccepted(p);
+        }
+    }
+
+    [Fact]
     public void RandomGraphCertificatesAreAccepted()
     {
         var all = SolverCertificates.Random(graphs: 80, seed: 20250601).ToList();

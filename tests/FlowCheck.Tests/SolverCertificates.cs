@@ -19,6 +19,11 @@ public static class SolverCertificates
     public static IEnumerable<Produced> Demo() =>
         DemoScenario.Designs().SelectMany(d => Solve(d.Name, d.Text, d.Fields));
 
+    /// <summary>The demo designs over F_p for the Mersenne prime p = 2^61 - 1 (common practice), near the
+    /// solver's limit of 2^62: residues far beyond 64-bit products.</summary>
+    public static IEnumerable<Produced> DemoOverLargePrime() =>
+        DemoScenario.Designs().SelectMany(d => Solve(d.Name, d.Text, [FieldSpec.PrimeField((1UL << 61) - 1)]));
+
     /// <summary>Random graphs of 2 to 8 nodes (names with every allowed punctuation, decimal weights,
     /// comments and `at` lines in the text), each solved over every field with both kinds.</summary>
     public static IEnumerable<Produced> Random(int graphs, int seed)
