@@ -6,7 +6,7 @@ using Newtonsoft.Json.Linq;
 namespace FlowCheck.Tests;
 
 /// <summary>A second, deliberately naive judge of certificates, written in the tests straight from
-/// shared/design/flows.md (sections 2-6) and docs/formats.md: dense matrices indexed by node, every
+/// docs/flows.md (sections 2-6, the design contract) and docs/formats.md: dense matrices indexed by node, every
 /// condition quantified over all nodes, Q arithmetic from the Fractions package, F_p residues as
 /// integral Fractions, primality by trial division. It shares no code with the checker. The corruption
 /// test uses it to tell a corruption that happens to be another valid certificate from a miss.</summary>
