@@ -32,7 +32,13 @@ public static class ConvertCommand
         // The canonical form carries no position hints (docs/formats.md), so .ograph output is exactly it.
         var text = format == GraphFileFormat.Ograph ? Graphs.CanonicalForm.Write(g) : GraphFiles.Write(g, format);
         SafeFile.WriteAllText(outPath, text, inPath);
-        stdout.WriteLine($"wrote {outPath}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs");
+        stdout.WriteLine($"wrote {outPath}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + TerminalsNote(g, format));
         return ExitCode.Flow;
     }
+
+    /// <summary>A reminder when a file cannot hold the inputs and outputs it was written with.</summary>
+    public static string TerminalsNote(Graphs.OpenGraph g, GraphFileFormat format)
+        => format is GraphFileFormat.Graph6 or GraphFileFormat.Sparse6 or GraphFileFormat.MatrixMarket && g.Inputs.Count + g.Outputs.Count > 0
+            ? " (this format keeps no inputs or outputs: name them with --inputs and --outputs when reading it)"
+            : "";
 }

@@ -40,7 +40,7 @@ public static class DrawCommand
         var text = extension == ".svg"
             ? SvgPicture.Write(PictureLayout.Arrange(g, result, title))
             : DotPicture.Write(g, result, title);
-        SafeFile.WriteAllText(outPath, text, [graphPath, .. certPath is null ? Array.Empty<string>() : [certPath]]);
+        SafeFile.WriteAllText(outPath, text, certPath is null ? [graphPath] : [graphPath, certPath]);
         stdout.WriteLine($"wrote {outPath}");
         return ExitCode.Flow;
     }

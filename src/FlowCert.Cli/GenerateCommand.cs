@@ -49,7 +49,7 @@ public static class GenerateCommand
         var format = GraphFiles.FormatOf(outPath);
         var g = FamilyGenerator.Generate(request);
         SafeFile.WriteAllText(outPath, GraphFiles.Write(g, format));
-        stdout.WriteLine($"wrote {outPath}: {request.Family} {request.Size}, {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs");
+        stdout.WriteLine($"wrote {outPath}: {request.Family} {request.Size}, {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + ConvertCommand.TerminalsNote(g, format));
         return ExitCode.Flow;
     }
 }

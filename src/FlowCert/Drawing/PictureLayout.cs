@@ -12,7 +12,13 @@ namespace FlowCert.Drawing;
 /// </summary>
 public static class PictureLayout
 {
-    public const double ColumnGap = 120, RowGap = 58, HintUnit = 64, Left = 70, Top = 96;
+    public const double ColumnGap = 120, RowGap = 58, HintUnit = 64, Left = 70, Top = 112;
+
+    /// <summary>Small graphs are drawn roomier, so that crossing arrows and their labels stay apart.</summary>
+    public const int RoomyNodes = 16;
+    public const double RoomyScale = 1.5;
+
+    private static double Scale(OpenGraph g) => g.NodeCount <= RoomyNodes ? RoomyScale : 1.0;
 
     public static FlowPicture Arrange(OpenGraph g, FlowResult? result, string title)
     {
@@ -32,8 +38,8 @@ public static class PictureLayout
             var y = new double[g.NodeCount];
             for (int v = 0; v < g.NodeCount; v++)
             {
-                x[v] = Left + (double)(g.Positions[v].X - minX) * HintUnit;
-                y[v] = Top + (double)(g.Positions[v].Y - minY) * HintUnit;
+                x[v] = Left + (double)(g.Positions[v].X - minX) * HintUnit * Scale(g);
+                y[v] = Top + (double)(g.Positions[v].Y - minY) * HintUnit * Scale(g);
             }
             return new FlowPicture { Graph = g, Result = result, Title = title, Arrangement = PictureArrangement.PositionHints, X = x, Y = y, ColumnTitles = [] };
         }
@@ -83,13 +89,14 @@ public static class PictureLayout
         int tallest = Math.Max(1, members.Select(m => m.Count).DefaultIfEmpty(0).Max());
         var x = new double[g.NodeCount];
         var y = new double[g.NodeCount];
+        double columnGap = ColumnGap * Scale(g), rowGap = RowGap * Scale(g);
         void Place(int c)
         {
-            double offset = (tallest - members[c].Count) * RowGap / 2;
+            double offset = (tallest - members[c].Count) * rowGap / 2;
             for (int k = 0; k < members[c].Count; k++)
             {
-                x[members[c][k]] = Left + c * ColumnGap;
-                y[members[c][k]] = Top + offset + k * RowGap;
+                x[members[c][k]] = Left + c * columnGap;
+                y[members[c][k]] = Top + offset + k * rowGap;
             }
         }
         bool hinted = g.NodeCount > 0 && g.Positions.Count == g.NodeCount;
@@ -120,7 +127,7 @@ public static class PictureLayout
                 }
             }
         }
-        var headings = Enumerable.Range(0, count).Select(c => (Left + c * ColumnGap, titles[c])).ToList();
+        var headings = Enumerable.Range(0, count).Select(c => (Left + c * columnGap, titles[c])).ToList();
         return new FlowPicture { Graph = g, Result = result, Title = title, Arrangement = arrangement, X = x, Y = y, ColumnTitles = headings };
     }
 

@@ -27,13 +27,13 @@ internal static class SvgLegend
         if (r is { HasFlow: true })
         {
             lines.Add(new(Glyph.Correction, $"correction: from a measured node to each node of its correction vector over {r.Field.Name} (no label: coefficient 1)"));
-            lines.Add(new(Glyph.None, $"columns: the {KindText(r.Kind)} flow's {r.Depth} measurement round(s) of minimum depth, round 1 first; outputs last"));
+            lines.Add(new(Glyph.None, $"columns: the {Count(r.Depth, "measurement round")} of a {KindText(r.Kind)} flow of minimum depth, round 1 first; outputs last"));
         }
         if (r?.Obstruction is { } b)
         {
-            lines.Add(new(Glyph.Blocked, $"blocked set ({b.Nodes.Count} nodes): none of them can be corrected from outside it, so no {KindText(r.Kind)} flow over {r.Field.Name} exists"));
+            lines.Add(new(Glyph.Blocked, $"blocked set ({Count(b.Nodes.Count, "node")}): none of them can be corrected from outside it, so no {KindText(r.Kind)} flow over {r.Field.Name} exists"));
             if (r.Kind == FlowKind.General)
-                lines.Add(new(Glyph.None, $"the certificate proves it with {b.Witnesses.Count} left-kernel witness vector(s)"));
+                lines.Add(new(Glyph.None, $"the certificate proves it with {Count(b.Witnesses.Count, "left-kernel witness vector")}"));
         }
         if (p.Arrangement == PictureArrangement.PositionHints) lines.Add(new(Glyph.None, "layout: the position hints (at lines) of the graph file"));
         if (p.Arrangement == PictureArrangement.DistanceFromInputs) lines.Add(new(Glyph.None, "columns: distance from the nearest input (nodes no input reaches come after)"));

@@ -15,9 +15,12 @@ namespace FlowCert.Drawing;
 public static class SvgPicture
 {
     internal const double Radius = 11, Stub = 24;
-    internal const string EdgeColour = "#8f99a3", CorrectionColour = "#d9730d", WireColour = "#1f2933", TextColour = "#1f2933";
-    internal const string MeasuredFill = "#e3eefa", MeasuredStroke = "#2f5d8a", OutputFill = "#dff2df", OutputStroke = "#2e7d32";
-    internal const string BlockedFill = "#fbe0e0", BlockedStroke = "#c62828";
+    /// <summary>The palette of every picture (SVG and DOT).</summary>
+    public const string EdgeColour = "#8f99a3", CorrectionColour = "#d9730d", WireColour = "#1f2933", TextColour = "#1f2933";
+    /// <summary>Node fills and outlines by role.</summary>
+    public const string MeasuredFill = "#e3eefa", MeasuredStroke = "#2f5d8a", OutputFill = "#dff2df", OutputStroke = "#2e7d32";
+    /// <summary>Fill and outline of the nodes of a blocked set.</summary>
+    public const string BlockedFill = "#fbe0e0", BlockedStroke = "#c62828";
 
     public static string Write(FlowPicture p)
     {
@@ -28,7 +31,7 @@ public static class SvgPicture
         double contentRight = g.NodeCount == 0 ? PictureLayout.Left : p.X.Max() + Radius + Stub + 20;
         double contentBottom = g.NodeCount == 0 ? PictureLayout.Top : p.Y.Max() + Radius + 26;
         double legendTop = contentBottom + 20;
-        string subtitle = $"{g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs";
+        string subtitle = $"{Count(g.NodeCount, "node")}, {Count(g.Edges.Count, "edge")}, {Count(g.Inputs.Count, "input")}, {Count(g.Outputs.Count, "output")}";
         double width = Math.Ceiling(Math.Max(Math.Max(contentRight + 20, SvgLegend.Width(legend) + 40),
             Math.Max(Width(p.Title, 16) + 40, Width(subtitle, 12) + 40)));
         double height = Math.Ceiling(legendTop + SvgLegend.Height(legend) + 20);
@@ -40,24 +43,32 @@ public static class SvgPicture
         s.Append(Marker("correction-head", CorrectionColour));
         s.Append(Marker("wire-head", WireColour));
         s.Append("</defs>\n");
-        s.Append($"<rect x=\"0\" y=\"0\" width=\"{F(width)}\" height=\"{F(height)}\" fill=\"#ffffff\"/>\n");
+        s.Append($"<rect x=\"0.0\" y=\"0.0\" width=\"{F(width)}\" height=\"{F(height)}\" fill=\"#ffffff\"/>\n");
         s.Append($"<text x=\"20.0\" y=\"32.0\" font-size=\"16\" font-weight=\"bold\" fill=\"{TextColour}\">{Escape(p.Title)}</text>\n");
         s.Append($"<text x=\"20.0\" y=\"52.0\" font-size=\"12\" fill=\"#52606d\">{Escape(subtitle)}</text>\n");
 
         s.Append("<g id=\"column-titles\" font-size=\"12\" font-weight=\"bold\" fill=\"#52606d\" text-anchor=\"middle\">\n");
         foreach (var (x, text) in p.ColumnTitles)
-            s.Append($"<text x=\"{F(x)}\" y=\"{F(PictureLayout.Top - 34)}\">{Escape(text)}</text>\n");
+            s.Append($"<text x=\"{F(x)}\" y=\"{F(PictureLayout.Top - 38)}\">{Escape(text)}</text>\n");
         s.Append("</g>\n");
 
-        s.Append($"<g id=\"edges\" stroke=\"{EdgeColour}\" stroke-width=\"1.6\">\n");
-        foreach (var e in g.Edges)
-            s.Append($"<line x1=\"{F(p.X[e.U])}\" y1=\"{F(p.Y[e.U])}\" x2=\"{F(p.X[e.V])}\" y2=\"{F(p.Y[e.V])}\"/>\n");
+        var routes = EdgeRoutes.For(p);
+        s.Append($"<g id=\"edges\" fill=\"none\" stroke=\"{EdgeColour}\" stroke-width=\"1.6\">\n");
+        foreach (var route in routes) s.Append(route.Element).Append('\n');
         s.Append("</g>\n");
         if (p.ShowLabels)
         {
-            s.Append("<g id=\"weights\" font-size=\"10\" fill=\"#3e4c59\" text-anchor=\"middle\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">\n");
-            foreach (var e in g.Edges.Where(e => e.Weight != Algebra.Rational.One))
-                s.Append($"<text x=\"{F((p.X[e.U] + p.X[e.V]) / 2)}\" y=\"{F((p.Y[e.U] + p.Y[e.V]) / 2 - 4)}\">{Escape(e.Weight.ToString())}</text>\n");
+            s.Append("<g id=\"weights\" font-size=\"10\" fill=\"#3e4c59\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">\n");
+            for (int k = 0; k < g.Edges.Count; k++)
+            {
+                if (g.Edges[k].Weight == Algebra.Rational.One) continue;
+                // Beside a steep edge, above a flat one, so the label never sits on the line or under a name.
+                var (_, mx, my, steep) = routes[k];
+                s.Append(steep
+                    ? $"<text x=\"{F(mx + 5)}\" y=\"{F(my + 3.5)}\" text-anchor=\"start\">"
+                    : $"<text x=\"{F(mx)}\" y=\"{F(my - 4)}\" text-anchor=\"middle\">");
+                s.Append(Escape(g.Edges[k].Weight.ToString())).Append("</text>\n");
+            }
             s.Append("</g>\n");
         }
 
@@ -111,9 +122,9 @@ public static class SvgPicture
 
     /// <summary>
     /// A quadratic curve from circle to circle, bent to the left of the direction of travel so that it
-    /// stands apart from the straight edge between the same nodes; returns the path and its midpoint.
+    /// stands apart from the straight edge between the same nodes; returns the path and where its label goes.
     /// </summary>
-    internal static (string Path, double MidX, double MidY) CurvedArrow(double x1, double y1, double x2, double y2)
+    internal static (string Path, double LabelX, double LabelY) CurvedArrow(double x1, double y1, double x2, double y2)
     {
         double dx = x2 - x1, dy = y2 - y1, length = Math.Max(Math.Sqrt(dx * dx + dy * dy), 1e-9);
         double bend = Math.Min(0.22 * length, 48);
@@ -125,8 +136,12 @@ public static class SvgPicture
         }
         var (sx, sy) = Towards(x1, y1, cx, cy, Radius + 1);
         var (ex, ey) = Towards(x2, y2, cx, cy, Radius + 2);
-        double mx = 0.25 * sx + 0.5 * cx + 0.25 * ex, my = 0.25 * sy + 0.5 * cy + 0.25 * ey;
-        return ($"M{F(sx)},{F(sy)} Q{F(cx)},{F(cy)} {F(ex)},{F(ey)}", mx, my);
+        // The label sits at t = 0.7 along the curve, nearer the target, so that labels of arrows leaving
+        // one node for different targets do not meet where the arrows cross.
+        const double t = 0.7;
+        double lx = (1 - t) * (1 - t) * sx + 2 * t * (1 - t) * cx + t * t * ex;
+        double ly = (1 - t) * (1 - t) * sy + 2 * t * (1 - t) * cy + t * t * ey;
+        return ($"M{F(sx)},{F(sy)} Q{F(cx)},{F(cy)} {F(ex)},{F(ey)}", lx, ly - 3);
     }
 
     private static string Marker(string id, string colour)

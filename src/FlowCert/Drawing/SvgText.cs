@@ -35,6 +35,9 @@ internal static class SvgText
         return sb.ToString();
     }
 
+    /// <summary>"1 node", "2 nodes".</summary>
+    public static string Count(int n, string noun) => n == 1 ? $"1 {noun}" : $"{n} {noun}s";
+
     /// <summary>An upper estimate of the width of a line of text in DejaVu Sans at a font size.</summary>
     public static double Width(string s, double fontSize) => s.Length * fontSize * 0.62;
 }

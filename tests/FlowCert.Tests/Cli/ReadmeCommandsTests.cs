@@ -33,6 +33,7 @@ public partial class ReadmeCommandsTests
         var root = CorpusTests.RepositoryRoot();
         var commands = ConcreteCommands(File.ReadAllText(Path.Combine(root, "README.md")));
         Assert.Contains(commands, c => c.EndsWith("-- demo"));
+        Assert.True(commands.Count >= 10, $"only {commands.Count} README commands recognised");
         var scratch = Directory.CreateTempSubdirectory("flowcert-readme-").FullName;
         try
         {

@@ -3,8 +3,8 @@ namespace FlowCert.Graphs.Families;
 /// <summary>
 /// The simple cubic lattice of x by y by z nodes <c>x{a}y{b}z{c}</c>, counted from 0, with directions x, y
 /// and z. Inputs are the face a = 0 and outputs the face a = x - 1. Drawn in oblique projection: the
-/// node sits at (a + 0.4 c, b - 0.3 c), so deeper layers move up and to the right. Periodic wraps y and z
-/// (each needs at least 3 nodes).
+/// node sits at (2a + 0.8c, 2b - 0.6c), so edges along x and y are drawn twice as long as edges along z
+/// and deeper layers move up and to the right. Periodic wraps y and z (each needs at least 3 nodes).
 /// </summary>
 internal static class CubicLattice
 {
@@ -18,7 +18,7 @@ internal static class CubicLattice
         for (int a = 0; a < sx; a++)
             for (int b = 0; b < sy; b++)
                 for (int c = 0; c < sz; c++)
-                    d.Node(Name(a, b, c), a + 0.4m * c, b - 0.3m * c);
+                    d.Node(Name(a, b, c), 2 * a + 0.8m * c, 2 * b - 0.6m * c);
         for (int a = 0; a < sx; a++)
             for (int b = 0; b < sy; b++)
                 for (int c = 0; c < sz; c++)

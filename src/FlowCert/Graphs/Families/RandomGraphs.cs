@@ -59,8 +59,12 @@ internal static class RandomGraphs
             int u = Math.Min(points[i], points[j]), v = Math.Max(points[i], points[j]);
             if (i == j || u == v || edges.Contains((u, v)))
             {
-                // Check now and then whether any allowed pair is left; if none, this attempt is stuck.
-                if (++failures >= 64 + points.Count && !AnyAllowedPair(points, edges)) return null;
+                // After many refusals in a row, check whether any allowed pair is left; if none, this attempt is stuck.
+                if (++failures >= 64 + points.Count)
+                {
+                    if (!AnyAllowedPair(points, edges)) return null;
+                    failures = 0;
+                }
                 continue;
             }
             failures = 0;

@@ -18,6 +18,7 @@ public static class DotWriter
         sb.Append("graph open_graph {\n");
         sb.Append("  // written by flowcert: inputs are boxes, outputs double circles; edges are labelled with weights other than 1\n");
         sb.Append("  node [shape=circle, fontname=\"DejaVu Sans\", fontsize=10];\n");
+        sb.Append("  edge [fontname=\"DejaVu Sans\", fontsize=9];\n");
         for (int v = 0; v < g.NodeCount; v++)
         {
             var attributes = new List<string>();

@@ -99,9 +99,12 @@ public static class GraphFiles
             foreach (var n in names)
             {
                 if (!g.Contains(n))
-                    throw new GraphFileException(g.NodeCount == 0
+                {
+                    var order = NaturalNameOrder.Sort(g);
+                    throw new GraphFileException(order.Length == 0
                         ? $"{role} {n} is not a node of {fileName}, which has no nodes"
-                        : $"{role} {n} is not a node of {fileName} (its nodes are {g.Names[NaturalNameOrder.Sort(g)[0]]} to {g.Names[NaturalNameOrder.Sort(g)[^1]]})");
+                        : $"{role} {n} is not a node of {fileName} (its nodes are {g.Names[order[0]]} to {g.Names[order[^1]]})");
+                }
                 if (!seen.Add(n)) throw new GraphFileException($"{role} {n} is listed twice");
             }
         }
