@@ -79,6 +79,12 @@ public class CorruptionTests(ITestOutputHelper output)
             output.WriteLine($"  {count,6} rejected, {valid.GetValueOrDefault(kind),5} valid after all: {kind}");
         Assert.True(failures.Count == 0, string.Join("\n\n", failures));
         Assert.True(rejected.Values.Sum() >= Required, $"only {rejected.Values.Sum()} corrupted certificates");
+        // These can never give a valid certificate (flows.md section 3 condition 1, the hash, the key rules,
+        // the depth rule, the partition of M): the oracle must have found each of them invalid.
+        foreach (var name in new[] { "put an input in a support", "put an earlier node in a support", "alter the hash",
+                     "add an unknown key", "duplicate a key", "swap only the verdict string", "swap the verdict with a made-up proof",
+                     "change the depth", "drop a correction vector", "drop a node from its round", "duplicate a node in another round" })
+            Assert.True(valid.GetValueOrDefault(name) == 0, $"\"{name}\" gave a certificate the oracle calls valid");
         foreach (var name in Corruptions.OnObjects.Select(c => c.Name).Concat(Corruptions.OnText.Select(c => c.Name)))
             Assert.True(rejected.GetValueOrDefault(name) > 0, $"corruption \"{name}\" never produced a rejected certificate");
     }

@@ -125,12 +125,13 @@ public static class Corruptions
         return c;
     }
 
+    /// <summary>Adds an entry to a correction vector, on a node that <paramref name="where"/> allows for its owner.</summary>
     static JObject? AddEntry(JObject c, Random r, Func<string, string, bool> where)
     {
-        var vectors = Vectors(c);
+        var vectors = Vectors(c).Where(v => v.Owner is not null).ToList();
         if (vectors.Count == 0) return null;
         var (vector, owner) = PickOne(r, vectors);
-        var candidates = Names(c, "nodes").Where(n => vector[n] is null && (owner is null ? r.Next(2) == 0 : where(n, owner))).ToList();
+        var candidates = Names(c, "nodes").Where(n => vector[n] is null && where(n, owner!)).ToList();
         if (candidates.Count == 0) return null;
         var entries = vector.Properties().Select(p => new KeyValuePair<string, JToken?>(p.Name, p.Value)).ToList();
         entries.Add(new(PickOne(r, candidates), Pick(r, Elements(c))));
@@ -138,7 +139,19 @@ public static class Corruptions
         return c;
     }
 
-    static JObject? AddEntry(JObject c, Random r, Func<string, bool> where) => AddEntry(c, r, (n, _) => where(n));
+    /// <summary>Adds an entry on any node to any correction vector or witness.</summary>
+    static JObject? AddEntry(JObject c, Random r, Func<string, bool> where)
+    {
+        var vectors = Vectors(c);
+        if (vectors.Count == 0) return null;
+        var (vector, _) = PickOne(r, vectors);
+        var candidates = Names(c, "nodes").Where(n => vector[n] is null && where(n)).ToList();
+        if (candidates.Count == 0) return null;
+        var entries = vector.Properties().Select(p => new KeyValuePair<string, JToken?>(p.Name, p.Value)).ToList();
+        entries.Add(new(PickOne(r, candidates), Pick(r, Elements(c))));
+        vector.Replace(SortedObject(entries));
+        return c;
+    }
 
     static JObject? MoveToRound(JObject c, Random r)
     {
