@@ -4,7 +4,8 @@ namespace FlowCert.Algebra;
 /// What an elimination of a matrix B (rows 0..m-1, columns by id) tells the flow search: a basis of the
 /// left kernel, and for every row r with e_r in the column space of B the canonical solution of
 /// B c = e_r: the one that is zero off the greedy column basis taken in increasing column id. That
-/// solution is unique, so every implementation returns the same vectors.
+/// solution is unique, so every implementation returns the same solutions; the left-kernel basis may
+/// differ between implementations (callers that publish it reduce it to echelon form first).
 /// </summary>
 public interface IEliminationResult<T> where T : struct
 {

@@ -69,7 +69,11 @@ public readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
     public static bool operator !=(Rational a, Rational b) => !a.Equals(b);
 
     /// <summary>Canonical text: <c>a</c> or <c>a/b</c> with b &gt; 1.</summary>
-    public override string ToString() => Denominator.IsOne ? Numerator.ToString() : $"{Numerator}/{Denominator}";
+    public override string ToString()
+        => Denominator.IsOne ? Numerator.ToString(Invariant) : Numerator.ToString(Invariant) + "/" + Denominator.ToString(Invariant);
+
+    private static readonly System.Globalization.CultureInfo Invariant = System.Globalization.CultureInfo.InvariantCulture;
+    private static BigInteger ParseDigits(string digits) => BigInteger.Parse(digits, System.Globalization.NumberStyles.None, Invariant);
 
     /// <summary>
     /// Parses an exact weight: <c>-?digits</c>, <c>-?digits/digits</c> or <c>-?digits.digits</c>.
@@ -87,22 +91,22 @@ public readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
         {
             var (n, d) = (text[i..slash], text[(slash + 1)..]);
             if (!AllDigits(n) || !AllDigits(d)) return false;
-            var den = BigInteger.Parse(d);
+            var den = ParseDigits(d);
             if (den.IsZero) return false;
-            value = Create(negative ? -BigInteger.Parse(n) : BigInteger.Parse(n), den);
+            value = Create(negative ? -ParseDigits(n) : ParseDigits(n), den);
             return true;
         }
         if (dot >= 0)
         {
             var (w, f) = (text[i..dot], text[(dot + 1)..]);
             if (!AllDigits(w) || !AllDigits(f)) return false;
-            var num = BigInteger.Parse(w + f);
+            var num = ParseDigits(w + f);
             value = Create(negative ? -num : num, BigInteger.Pow(10, f.Length));
             return true;
         }
         var rest = text[i..];
         if (!AllDigits(rest)) return false;
-        var whole = BigInteger.Parse(rest);
+        var whole = ParseDigits(rest);
         value = FromInteger(negative ? -whole : whole);
         return true;
     }

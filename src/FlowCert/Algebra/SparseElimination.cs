@@ -69,6 +69,12 @@ public sealed class SparseElimination<T, TField> : IEliminationResult<T> where T
         return list;
     }
 
+    /// <summary>
+    /// The reduced row echelon form of B without its zero rows, in pivot order: a basis of the row space
+    /// that depends only on the row space (columns taken in increasing id).
+    /// </summary>
+    public IReadOnlyList<SparseVector<T>> ReducedRows() => pivots.Select(p => reduced[p.Row]).ToList();
+
     /// <summary>The rank of B.</summary>
     public int Rank => pivots.Count;
 

@@ -1,7 +1,7 @@
 using FlowCert.Algebra;
 using FlowCert.Flows;
 using FlowCert.Graphs;
-using Newtonsoft.Json;
+using FlowCert.Graphs.Formats;
 using Newtonsoft.Json.Linq;
 
 namespace FlowCert.Certificates;
@@ -11,79 +11,115 @@ public sealed class CertificateFormatException(string file, string problem, int 
     : Exception(line > 0 ? $"{file}:{line}:{column}: {problem}" : $"{file}: {problem}")
 {
     public string File { get; } = file;
+    public int Line { get; } = line;
+    public int Column { get; } = column;
 }
 
 /// <summary>
 /// Reads a certificate back into a <see cref="FlowResult"/> (for the schedule, simulation and drawing).
-/// It checks the shape, not the mathematics: that is the independent checker's job.
+/// It enforces the format (docs/formats.md): known keys only, the keys each verdict carries, the depth,
+/// node names, and the hash of the embedded graph. It does not re-check the mathematics: that is the
+/// independent checker's job (checker/FlowCheck).
 /// </summary>
 public static class CertificateReader
 {
+    private static readonly string[] CommonKeys = ["format", "version", "flow", "field", "graphSha256", "graph", "verdict", "producer"];
+    private static readonly string[] FlowKeys = ["depth", "rounds", "corrections"];
+    private static readonly string[] NoFlowKeys = ["obstruction"];
+
+    /// <summary>Reads a certificate file.</summary>
     public static FlowResult ReadFile(string path) => Parse(File.ReadAllText(path), path);
 
+    /// <summary>Parses certificate text; throws <see cref="CertificateFormatException"/> naming file, line and column.</summary>
     public static FlowResult Parse(string text, string fileName)
     {
-        JObject root;
-        try
-        {
-            using var reader = new JsonTextReader(new StringReader(text)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
-            root = JObject.Load(reader, new JsonLoadSettings { DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error });
-        }
-        catch (JsonReaderException e) { throw new CertificateFormatException(fileName, e.Message.Split(" Path")[0], e.LineNumber, e.LinePosition); }
-        CertificateFormatException Bad(string problem) => new(fileName, problem);
-        string Str(JToken? t, string what) => t?.Type == JTokenType.String ? (string)t! : throw Bad($"{what} must be a string");
-        string[] Names(JToken? t, string what) => t is JArray a ? a.Select(x => Str(x, what)).ToArray() : throw Bad($"{what} must be a list of names");
+        try { return ParseChecked(text, fileName); }
+        catch (GraphFormatException e) { throw new CertificateFormatException(e.File, e.Problem, e.Line, e.Column); }
+    }
 
-        if (Str(root["format"], "format") != CertificateWriter.Format) throw Bad($"unknown format '{root["format"]}'");
-        if (root["version"]?.Type != JTokenType.Integer || (int)root["version"]! != CertificateWriter.Version) throw Bad($"unknown version '{root["version"]}'");
-        var kind = Str(root["flow"], "flow") switch
+    private static FlowResult ParseChecked(string text, string fileName)
+    {
+        var source = JsonSource.Load(text, fileName);
+        CertificateFormatException Bad(JToken? at, string problem)
+        {
+            if (at is null) return new CertificateFormatException(fileName, problem);
+            var (line, column) = source.Position(at);
+            return new CertificateFormatException(fileName, problem, line, column);
+        }
+        if (source.Root is not JObject root) throw Bad(source.Root, "a certificate is one JSON object");
+        string Str(JToken? t, string what) => t?.Type == JTokenType.String ? (string)t! : throw Bad(t ?? root, $"{what} must be a string");
+        JToken Required(JObject o, string key) => o[key] ?? throw Bad(o, $"key '{key}' is missing");
+        void OnlyKeys(JObject o, IEnumerable<string> allowed, string where)
+        {
+            var set = allowed.ToHashSet();
+            foreach (var p in o.Properties())
+                if (!set.Contains(p.Name)) throw Bad(p, $"unknown key '{p.Name}' in {where}");
+        }
+
+        if (Str(Required(root, "format"), "format") != CertificateWriter.Format) throw Bad(root["format"], $"unknown format '{root["format"]}'");
+        var version = Required(root, "version");
+        if (version.Type != JTokenType.Integer || (long)version != CertificateWriter.Version) throw Bad(version, $"unknown version '{version}'");
+        var verdict = Str(Required(root, "verdict"), "verdict");
+        var verdictKeys = verdict switch
+        {
+            "flow" => FlowKeys,
+            "noflow" => NoFlowKeys,
+            _ => throw Bad(root["verdict"], $"unknown verdict '{verdict}'"),
+        };
+        OnlyKeys(root, CommonKeys.Concat(verdictKeys), "the certificate");
+        var kindText = Str(Required(root, "flow"), "flow");
+        var kind = kindText switch
         {
             "general" => FlowKind.General,
             "causal" => FlowKind.Causal,
-            var other => throw Bad($"unknown flow '{other}'"),
+            _ => throw Bad(root["flow"], $"unknown flow '{kindText}'"),
         };
-        var fieldName = Str(root["field"], "field");
+        var fieldName = Str(Required(root, "field"), "field");
         FieldSpec field;
         try { field = fieldName == "Q" ? FieldSpec.Rationals : fieldName.StartsWith('F') ? FieldSpec.Parse(fieldName) : throw new FieldSpecException(""); }
-        catch (FieldSpecException) { throw Bad($"unknown field '{fieldName}'"); }
+        catch (FieldSpecException) { throw Bad(root["field"], $"unknown field '{fieldName}'"); }
+        if (field.Name != fieldName) throw Bad(root["field"], $"field '{fieldName}' is not written canonically ('{field.Name}')");
+        if (Required(root, "producer") is not JObject producer) throw Bad(root["producer"], "producer must be an object");
+        OnlyKeys(producer, ["name", "version"], "producer");
 
-        var gj = root["graph"] as JObject ?? throw Bad("graph must be an object");
-        var edges = new List<(string, string, Rational)>();
-        foreach (var e in gj["edges"] as JArray ?? throw Bad("graph.edges must be a list"))
+        if (Required(root, "graph") is not JObject graphObject) throw Bad(root["graph"], "graph must be an object");
+        var graph = GraphJson.FromObject(graphObject, source);
+        var hash = Str(Required(root, "graphSha256"), "graphSha256");
+        if (hash != CanonicalForm.Sha256(graph)) throw Bad(root["graphSha256"], "graphSha256 is not the SHA-256 of the embedded graph's canonical form");
+
+        int Node(JToken t)
         {
-            if (e is not JArray { Count: 3 } triple) throw Bad("every edge must be [u, v, weight]");
-            if (!Rational.TryParse(Str(triple[2], "edge weight"), out var w)) throw Bad($"bad edge weight '{triple[2]}'");
-            edges.Add((Str(triple[0], "edge end"), Str(triple[1], "edge end"), w));
+            var name = Str(t, "a node");
+            return graph.Contains(name) ? graph.IndexOf(name) : throw Bad(t, $"unknown node '{name}'");
         }
-        OpenGraph graph;
-        try { graph = new OpenGraph(Names(gj["nodes"], "graph.nodes"), edges, Names(gj["inputs"], "graph.inputs"), Names(gj["outputs"], "graph.outputs")); }
-        catch (ArgumentException e) { throw Bad("graph: " + e.Message); }
-        int Node(string name) => graph.Contains(name) ? graph.IndexOf(name) : throw Bad($"unknown node '{name}'");
-        NodeVector Vector(JToken? t, string what)
+        int Key(JProperty p) => graph.Contains(p.Name) ? graph.IndexOf(p.Name) : throw Bad(p, $"unknown node '{p.Name}'");
+        int[] Nodes(JToken? t, string what) => t is JArray a ? a.Select(Node).ToArray() : throw Bad(t ?? root, $"{what} must be a list of node names");
+        NodeVector Vector(JToken t, string what)
         {
-            if (t is not JObject o) throw Bad($"{what} must be an object");
-            return new NodeVector(o.Properties().Select(p => (Node(p.Name), Str(p.Value, what))).OrderBy(x => x.Item1).ToList());
+            if (t is not JObject o) throw Bad(t, $"{what} must be an object");
+            return new NodeVector(o.Properties().Select(p => (Key(p), Str(p.Value, what))).OrderBy(x => x.Item1).ToList());
         }
 
-        var verdict = Str(root["verdict"], "verdict");
         var rounds = new List<IReadOnlyList<int>>();
         var corrections = new Dictionary<int, NodeVector>();
         BlockedSet? obstruction = null;
-        switch (verdict)
+        if (verdict == "flow")
         {
-            case "flow":
-                foreach (var round in root["rounds"] as JArray ?? throw Bad("rounds must be a list"))
-                    rounds.Add(Names(round, "round").Select(Node).ToArray());
-                foreach (var p in (root["corrections"] as JObject ?? throw Bad("corrections must be an object")).Properties())
-                    corrections[Node(p.Name)] = Vector(p.Value, $"correction of {p.Name}");
-                break;
-            case "noflow":
-                var ob = root["obstruction"] as JObject ?? throw Bad("obstruction must be an object");
-                var witnesses = (ob["witnesses"] as JArray ?? []).Select(w => Vector(w, "witness")).ToList();
-                obstruction = new BlockedSet(Names(ob["blocked"], "blocked").Select(Node).ToArray(), witnesses);
-                break;
-            default:
-                throw Bad($"unknown verdict '{verdict}'");
+            foreach (var round in Required(root, "rounds") as JArray ?? throw Bad(root["rounds"], "rounds must be a list"))
+                rounds.Add(Nodes(round, "a round"));
+            var depth = Required(root, "depth");
+            if (depth.Type != JTokenType.Integer || (long)depth != rounds.Count) throw Bad(depth, $"depth {depth} is not the number of rounds ({rounds.Count})");
+            foreach (var p in (Required(root, "corrections") as JObject ?? throw Bad(root["corrections"], "corrections must be an object")).Properties())
+                corrections[Key(p)] = Vector(p.Value, $"the correction of {p.Name}");
+        }
+        else
+        {
+            if (Required(root, "obstruction") is not JObject ob) throw Bad(root["obstruction"], "obstruction must be an object");
+            OnlyKeys(ob, kind == FlowKind.General ? ["blocked", "witnesses"] : ["blocked"], "obstruction");
+            var witnesses = kind == FlowKind.General
+                ? (Required(ob, "witnesses") as JArray ?? throw Bad(ob["witnesses"], "witnesses must be a list")).Select(w => Vector(w, "a witness")).ToList()
+                : [];
+            obstruction = new BlockedSet(Nodes(Required(ob, "blocked"), "blocked"), witnesses);
         }
         return new FlowResult
         {

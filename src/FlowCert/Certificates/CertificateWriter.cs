@@ -1,6 +1,7 @@
 using System.Text;
 using FlowCert.Flows;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Certificates;
 
@@ -39,12 +40,7 @@ public static class CertificateWriter
         sb.Append($"  \"flow\": {Quote(KindName(r.Kind))},\n");
         sb.Append($"  \"field\": {Quote(r.Field.Name)},\n");
         sb.Append($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
-        sb.Append("  \"graph\": {\n");
-        sb.Append($"    \"inputs\": {List(g.SortedInputs)},\n");
-        sb.Append($"    \"outputs\": {List(g.SortedOutputs)},\n");
-        sb.Append($"    \"nodes\": {List(Enumerable.Range(0, g.NodeCount))},\n");
-        sb.Append("    \"edges\": ").Append(Block(g.Edges.Select(e => $"[{N(e.U)}, {N(e.V)}, {Quote(e.Weight.ToString())}]"), "    ", '[', ']')).Append('\n');
-        sb.Append("  },\n");
+        sb.Append("  \"graph\": ").Append(GraphJson.WriteObject(g, "  ")).Append(",\n");
         if (r.Obstruction is null)
         {
             sb.Append("  \"verdict\": \"flow\",\n");
@@ -66,16 +62,5 @@ public static class CertificateWriter
         return sb.ToString();
     }
 
-    /// <summary>A JSON string literal (names and field elements are ASCII, but escape properly anyway).</summary>
-    internal static string Quote(string s)
-    {
-        var sb = new StringBuilder(s.Length + 2).Append('"');
-        foreach (var c in s)
-        {
-            if (c == '"' || c == '\\') sb.Append('\\').Append(c);
-            else if (c < 0x20 || c > 0x7e) sb.Append($"\\u{(int)c:x4}");
-            else sb.Append(c);
-        }
-        return sb.Append('"').ToString();
-    }
+    private static string Quote(string s) => JsonSource.Quote(s);
 }

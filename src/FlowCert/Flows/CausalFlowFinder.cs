@@ -12,25 +12,20 @@ internal static class CausalFlowFinder
 {
     public static FlowResult Find<T, TField>(FieldGraph<T, TField> g)
         where T : struct where TField : struct, IField<T>
+        => LayeredSearch.Run(g, FlowKind.Causal, state => Step(g, state));
+
+    private static LayerOutcome Step<T, TField>(FieldGraph<T, TField> g, LayerState state)
+        where T : struct where TField : struct, IField<T>
     {
-        var f = g.Field;
-        var state = new LayerState(g.Neighbours, g.Graph.Inputs, g.Graph.Outputs);
-        var corrections = new Dictionary<int, NodeVector>();
-        while (state.UnprocessedCount > 0)
+        var chosen = new SortedDictionary<int, int>();
+        foreach (var u in state.Active)
         {
-            var chosen = new SortedDictionary<int, int>();
-            foreach (var u in state.Active)
-            {
-                if (state.UnprocessedNeighbours[u] != 1) continue;
-                int v = Array.Find(g.Neighbours[u], w => !state.Processed[w]);
-                chosen.TryAdd(v, u); // Active is visited in increasing order: the first u is the smallest
-            }
-            if (chosen.Count == 0)
-                return GeneralFlowFinder.Result(g, state, corrections, new BlockedSet(state.Unprocessed(), []), FlowKind.Causal);
-            foreach (var (v, u) in chosen)
-                corrections[v] = GeneralFlowFinder.ToNodeVector(f, [u], [f.Inverse(g.Weight(v, u))]);
-            state.AddLayer(chosen.Keys.ToArray());
+            if (state.UnprocessedNeighbours[u] != 1) continue;
+            int v = Array.Find(g.Neighbours[u], w => !state.Processed[w]);
+            chosen.TryAdd(v, u); // Active is visited in increasing order: the first u is the smallest
         }
-        return GeneralFlowFinder.Result(g, state, corrections, null, FlowKind.Causal);
+        if (chosen.Count == 0) return LayerOutcome.Stuck(new BlockedSet(state.Unprocessed(), []));
+        return LayerOutcome.Found(chosen.ToDictionary(
+            p => p.Key, p => LayeredSearch.ToNodeVector(g.Field, [p.Value], [g.Field.Inverse(g.Weight(p.Key, p.Value))])));
     }
 }

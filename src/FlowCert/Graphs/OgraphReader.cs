@@ -7,9 +7,9 @@ namespace FlowCert.Graphs;
 /// <summary>Reads the line-oriented <c>.ograph</c> text format (docs/formats.md).</summary>
 public static partial class OgraphReader
 {
-    [GeneratedRegex(@"^[A-Za-z_][A-Za-z0-9_.:\-]*$")]
+    [GeneratedRegex(@"^[A-Za-z_][A-Za-z0-9_.:\-]*\z")]
     private static partial Regex NamePattern();
-    [GeneratedRegex(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?$")]
+    [GeneratedRegex(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?\z")]
     private static partial Regex CoordinatePattern();
 
     /// <summary>True when the text is a valid node name.</summary>

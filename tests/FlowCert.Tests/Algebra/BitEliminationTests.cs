@@ -25,6 +25,10 @@ public class BitEliminationTests
             var b = bits.SolveUnitVectors();
             Assert.Equal(a.Keys.Order(), b.Keys.Order());
             foreach (var r in a.Keys) Assert.Equal(a[r].Indices, b[r].Indices);
+            // The kernel bases may differ, but their reduced echelon forms (what witnesses publish) may not.
+            var ka = new SparseElimination<ulong, PrimeField>(f2, sparse.LeftKernel()).ReducedRows();
+            var kb = new SparseElimination<ulong, PrimeField>(f2, bits.LeftKernel()).ReducedRows();
+            Assert.Equal(ka.Select(v => string.Join(",", v.Indices)), kb.Select(v => string.Join(",", v.Indices)));
             // Each kernel vector really annihilates B (parity of the shared ones in every column).
             foreach (var y in bits.LeftKernel())
                 foreach (var col in supports.SelectMany(s => s).Distinct())

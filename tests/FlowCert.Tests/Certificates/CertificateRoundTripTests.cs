@@ -40,4 +40,28 @@ public class CertificateRoundTripTests
         var e = Assert.Throws<CertificateFormatException>(() => CertificateReader.Parse(text, "demo.json"));
         Assert.Contains(expected, e.Message);
     }
+
+    private static string Wire() => CertificateWriter.Write(FlowSolver.Solve(
+        FlowCert.Graphs.OgraphReader.Parse("input a\noutput c\nedge a b\nedge b c -1/2\n", "wire.ograph"), FlowCert.Algebra.FieldSpec.Rationals, FlowKind.General));
+
+    // docs/formats.md: "A reader rejects unknown keys, an unknown format, version, flow, field or verdict."
+    [Theory]
+    [InlineData("\"depth\": 2,", "\"depth\": 2,\n  \"extra\": 1,", "unknown key 'extra' in the certificate")]
+    [InlineData("\"depth\": 2,", "\"depth\": 3,", "depth 3 is not the number of rounds (2)")]
+    [InlineData("\"field\": \"Q\"", "\"field\": \"F07\"", "field 'F07' is not written canonically")]
+    [InlineData("\"verdict\": \"flow\",", "\"verdict\": \"flow\",\n  \"obstruction\": {},", "unknown key 'obstruction'")]
+    [InlineData("[\"b\", \"c\", \"-1/2\"]", "[\"b\", \"c\", \"-1/3\"]", "graphSha256 is not the SHA-256")]
+    [InlineData("\"a\": {\"b\": \"1\"}", "\"a\": {\"z\": \"1\"}", "unknown node 'z'")]
+    public void AReaderRejectsWhatTheFormatDoesNotAllowNamingLineAndColumn(string from, string to, string expected)
+    {
+        var text = Wire();
+        Assert.Contains(from, text);
+        var e = Assert.Throws<CertificateFormatException>(() => CertificateReader.Parse(text.Replace(from, to), "wire.json"));
+        Assert.Contains(expected, e.Message);
+        Assert.True(e.Line > 1 && e.Column > 0, e.Message);
+    }
+
+    [Fact]
+    public void AnHonestCertificateIsReadBack()
+        => Assert.Equal(2, CertificateReader.Parse(Wire(), "wire.json").Depth);
 }

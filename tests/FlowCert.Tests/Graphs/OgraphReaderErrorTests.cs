@@ -174,4 +174,12 @@ public class OgraphReaderErrorTests
         Assert.Equal((2, 8), (e.Line, e.Column));
         Assert.Contains("at most 9 digits", e.Message);
     }
+
+    [Theory]
+    [InlineData("a\n")]
+    [InlineData("a\r")]
+    [InlineData("")]
+    public void ANameWithALineBreakOrNothingIsNotAValidName(string name)
+        // .NET's '$' also matches before a final newline; names must end at the end of the text.
+        => Assert.False(FlowCert.Graphs.OgraphReader.IsValidName(name));
 }

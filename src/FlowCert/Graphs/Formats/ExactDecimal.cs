@@ -10,7 +10,7 @@ public static partial class ExactDecimal
     /// <summary>The largest exponent accepted, so that a typo cannot ask for a number with a billion digits.</summary>
     public const int MaxExponent = 4000;
 
-    [GeneratedRegex(@"^([+-]?)([0-9]*)(?:\.([0-9]*))?(?:[eE]([+-]?[0-9]+))?$")]
+    [GeneratedRegex(@"^([+-]?)([0-9]*)(?:\.([0-9]*))?(?:[eE]([+-]?[0-9]+))?\z")]
     private static partial Regex Pattern();
 
     /// <summary>
@@ -25,8 +25,8 @@ public static partial class ExactDecimal
         string whole = m.Groups[2].Value, fraction = m.Groups[3].Value;
         if (whole.Length + fraction.Length == 0) return false;
         long exponent = 0;
-        if (m.Groups[4].Success && (!long.TryParse(m.Groups[4].Value, out exponent) || Math.Abs(exponent) > MaxExponent)) return false;
-        var digits = BigInteger.Parse("0" + whole + fraction);
+        if (m.Groups[4].Success && (!long.TryParse(m.Groups[4].Value, System.Globalization.NumberStyles.AllowLeadingSign, System.Globalization.CultureInfo.InvariantCulture, out exponent) || Math.Abs(exponent) > MaxExponent)) return false;
+        var digits = BigInteger.Parse("0" + whole + fraction, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture);
         if (m.Groups[1].Value == "-") digits = -digits;
         long shift = exponent - fraction.Length;
         value = shift >= 0
@@ -49,7 +49,7 @@ public static partial class ExactDecimal
         if (!den.IsOne) return false;
         int scale = Math.Max(twos, fives);
         var scaled = BigInteger.Abs(r.Numerator) * BigInteger.Pow(10, scale) / r.Denominator;
-        var digits = scaled.ToString().PadLeft(scale + 1, '0');
+        var digits = scaled.ToString(System.Globalization.CultureInfo.InvariantCulture).PadLeft(scale + 1, '0');
         var sign = r.Sign < 0 ? "-" : "";
         text = scale == 0 ? sign + digits : $"{sign}{digits[..^scale]}.{digits[^scale..]}";
         return true;

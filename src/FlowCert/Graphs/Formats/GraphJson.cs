@@ -1,7 +1,5 @@
 using System.Text;
 using FlowCert.Algebra;
-using FlowCert.Certificates;
-using Newtonsoft.Json;
 using Newtonsoft.Json.Linq;
 
 namespace FlowCert.Graphs.Formats;
@@ -17,46 +15,42 @@ public static class GraphJson
     /// <summary>The keys of the object, in the order written.</summary>
     public static readonly string[] Keys = ["inputs", "outputs", "nodes", "edges"];
 
-    public static string Write(OpenGraph g)
+    /// <summary>The graph as a JSON file: the object at indentation zero, then LF.</summary>
+    public static string Write(OpenGraph g) => WriteObject(g, "") + "\n";
+
+    /// <summary>
+    /// The graph object as written inside a certificate and on its own: keys one level deeper than
+    /// <paramref name="indent"/>, one edge a line, the closing brace at <paramref name="indent"/>.
+    /// </summary>
+    public static string WriteObject(OpenGraph g, string indent)
     {
-        string N(int v) => CertificateWriter.Quote(g.Names[v]);
+        string N(int v) => JsonSource.Quote(g.Names[v]);
         string List(IEnumerable<int> nodes) => "[" + string.Join(", ", nodes.Select(N)) + "]";
         var sb = new StringBuilder("{\n");
-        sb.Append($"  \"inputs\": {List(g.SortedInputs)},\n");
-        sb.Append($"  \"outputs\": {List(g.SortedOutputs)},\n");
-        sb.Append($"  \"nodes\": {List(Enumerable.Range(0, g.NodeCount))},\n");
-        sb.Append("  \"edges\": ");
+        sb.Append($"{indent}  \"inputs\": {List(g.SortedInputs)},\n");
+        sb.Append($"{indent}  \"outputs\": {List(g.SortedOutputs)},\n");
+        sb.Append($"{indent}  \"nodes\": {List(Enumerable.Range(0, g.NodeCount))},\n");
+        sb.Append($"{indent}  \"edges\": ");
         if (g.Edges.Count == 0) sb.Append("[]");
         else
             sb.Append("[\n")
-              .Append(string.Join(",\n", g.Edges.Select(e => $"    [{N(e.U)}, {N(e.V)}, {CertificateWriter.Quote(e.Weight.ToString())}]")))
-              .Append("\n  ]");
-        return sb.Append("\n}\n").ToString();
+              .Append(string.Join(",\n", g.Edges.Select(e => $"{indent}    [{N(e.U)}, {N(e.V)}, {JsonSource.Quote(e.Weight.ToString())}]")))
+              .Append($"\n{indent}  ]");
+        return sb.Append($"\n{indent}}}").ToString();
     }
 
+    /// <summary>Reads a graph JSON file; errors name the file, line and column.</summary>
     public static OpenGraph Parse(string text, string fileName)
     {
-        var lines = text.Split('\n');
-        GraphFormatException At(JToken t, string problem)
-        {
-            var info = (IJsonLineInfo)t;
-            return info.HasLineInfo()
-                ? new GraphFormatException(fileName, info.LineNumber, StartColumn(lines, t, info), problem)
-                : new GraphFormatException(fileName, 1, 1, problem);
-        }
-        JToken root;
-        try
-        {
-            using var reader = new JsonTextReader(new StringReader(text)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
-            root = JToken.ReadFrom(reader, new JsonLoadSettings { DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error, LineInfoHandling = LineInfoHandling.Load });
-            if (reader.Read() && reader.TokenType != JsonToken.Comment)
-                throw new GraphFormatException(fileName, reader.LineNumber, reader.LinePosition, "text after the graph object");
-        }
-        catch (JsonReaderException e)
-        {
-            throw new GraphFormatException(fileName, Math.Max(e.LineNumber, 1), Math.Max(e.LinePosition, 1), e.Message.Split(" Path")[0].TrimEnd('.'));
-        }
-        if (root is not JObject obj) throw At(root, "a graph JSON file holds one object with keys inputs, outputs, nodes and edges");
+        var source = JsonSource.Load(text, fileName);
+        if (source.Root is not JObject obj) throw source.At(source.Root, "a graph JSON file holds one object with keys inputs, outputs, nodes and edges");
+        return FromObject(obj, source);
+    }
+
+    /// <summary>Reads a graph object (on its own or inside a certificate).</summary>
+    public static OpenGraph FromObject(JObject obj, JsonSource source)
+    {
+        GraphFormatException At(JToken t, string problem) => source.At(t, problem);
         foreach (var p in obj.Properties())
             if (!Keys.Contains(p.Name))
                 throw At(p, $"unknown key '{p.Name}': a graph object has exactly inputs, outputs, nodes and edges");
@@ -113,24 +107,5 @@ public static class GraphJson
             edges.Add((u, v, w));
         }
         return new OpenGraph(nodes, edges, inputs, outputs);
-    }
-
-    /// <summary>
-    /// Json.NET places a token at its end; a message is clearer at its start. For a string value, walk back
-    /// to its opening quote; for a property, to the quote of its name; otherwise keep the reported column.
-    /// </summary>
-    private static int StartColumn(string[] lines, JToken t, IJsonLineInfo info)
-    {
-        int line = info.LineNumber - 1, end = info.LinePosition;
-        if (line < 0 || line >= lines.Length) return Math.Max(end, 1);
-        var text = lines[line];
-        if (t is JProperty) end = text.LastIndexOf(':', Math.Min(end, text.Length) - 1) + 1;
-        if (t.Type == JTokenType.String || t is JProperty)
-        {
-            int close = text.LastIndexOf('"', Math.Clamp(end - 1, 0, text.Length - 1));
-            for (int i = close - 1; i >= 0; i--)
-                if (text[i] == '"' && (i == 0 || text[i - 1] != '\\')) return i + 1;
-        }
-        return Math.Max(end, 1);
     }
 }

@@ -33,7 +33,7 @@ public static partial class MatrixMarketReader
     /// <summary>The header's first word.</summary>
     public const string Banner = "%%MatrixMarket";
 
-    [GeneratedRegex(@"^[+-]?[0-9]+$")]
+    [GeneratedRegex(@"^[+-]?[0-9]+\z")]
     private static partial Regex IntegerPattern();
 
     private readonly record struct Token(string Text, int Column);

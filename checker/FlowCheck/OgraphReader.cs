@@ -1,0 +1,86 @@
+using System.Text.RegularExpressions;
+
+namespace FlowCheck;
+
+/// <summary>Reads the .ograph text format of docs/formats.md into a sorted <see cref="OpenGraph"/>.</summary>
+public static class OgraphReader
+{
+    static readonly Regex Coordinate = new(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?\z");
+
+    public static OpenGraph Read(string path)
+    {
+        string text;
+        try { text = File.ReadAllText(path); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        { throw new UnreadableInput($"{path}: {e.Message}"); }
+        var nodes = new HashSet<string>();
+        var inputs = new Dictionary<string, int>();
+        var outputs = new Dictionary<string, int>();
+        var edges = new Dictionary<(string, string), (Rational W, int Line)>();
+        var mentions = new List<(string Name, int Line, int Column)>();
+        var lines = text.Split('\n');
+        for (var i = 0; i < lines.Length; i++)
+        {
+            var line = i + 1;
+            var tokens = Tokens(lines[i].TrimEnd('\r'));
+            if (tokens.Count == 0) continue;
+            Exception Error(int k, string what) => new UnreadableInput($"{path}:{line}:{tokens[k].Column}: {what}");
+            string NameAt(int k) => OpenGraph.IsName(tokens[k].Text) ? tokens[k].Text : throw Error(k, $"bad name \"{tokens[k].Text}\"");
+            switch (tokens[0].Text)
+            {
+                case "input" or "output":
+                    var seen = tokens[0].Text == "input" ? inputs : outputs;
+                    for (var k = 1; k < tokens.Count; k++)
+                    {
+                        var name = NameAt(k);
+                        if (!seen.TryAdd(name, line)) throw Error(k, $"{name} listed twice as {tokens[0].Text} (lines {seen[name]} and {line})");
+                        mentions.Add((name, line, tokens[k].Column));
+                    }
+                    break;
+                case "node":
+                    for (var k = 1; k < tokens.Count; k++) nodes.Add(NameAt(k));
+                    break;
+                case "edge":
+                    if (tokens.Count is not (3 or 4)) throw Error(0, "wrong number of tokens: edge U V [W]");
+                    var (u, v) = (NameAt(1), NameAt(2));
+                    if (u == v) throw Error(2, $"self-loop on {u}");
+                    var w = tokens.Count == 4 ? Rational.ParseWeight(tokens[3].Text) : Rational.One;
+                    if (w is not { } weight || weight.Num.IsZero) throw Error(3, $"bad or zero weight \"{tokens[3].Text}\"");
+                    var key = string.CompareOrdinal(u, v) < 0 ? (u, v) : (v, u);
+                    if (edges.TryGetValue(key, out var first)) throw Error(0, $"edge {u} {v} given twice (lines {first.Line} and {line})");
+                    edges[key] = (weight, line);
+                    nodes.Add(u);
+                    nodes.Add(v);
+                    break;
+                case "at":
+                    if (tokens.Count != 4) throw Error(0, "wrong number of tokens: at NODE X Y");
+                    mentions.Add((NameAt(1), line, tokens[1].Column));
+                    for (var k = 2; k < 4; k++)
+                        if (!Coordinate.IsMatch(tokens[k].Text)) throw Error(k, $"bad coordinate \"{tokens[k].Text}\"");
+                    break;
+                case "plane":
+                    throw Error(0, "plane is reserved for a later version");
+                default:
+                    throw Error(0, $"unknown keyword \"{tokens[0].Text}\"");
+            }
+        }
+        foreach (var (name, line, column) in mentions.Where(m => !nodes.Contains(m.Name)))
+            throw new UnreadableInput($"{path}:{line}:{column}: unknown node {name}");
+        var edgeList = edges.Select(e => new Edge(e.Key.Item1, e.Key.Item2, e.Value.W))
+            .OrderBy(e => e.U, StringComparer.Ordinal).ThenBy(e => e.V, StringComparer.Ordinal).ToList();
+        return new OpenGraph(Sorted(inputs.Keys), Sorted(outputs.Keys), Sorted(nodes), edgeList);
+    }
+
+    static List<string> Sorted(IEnumerable<string> names) => names.Order(StringComparer.Ordinal).ToList();
+
+    /// <summary>Splits a line at spaces and tabs, dropping a '#' comment; columns count from 1.</summary>
+    static List<(string Text, int Column)> Tokens(string line)
+    {
+        var hash = line.IndexOf('#');
+        if (hash >= 0) line = line[..hash];
+        var tokens = new List<(string, int)>();
+        foreach (Match m in Regex.Matches(line, @"[^ \t]+"))
+            tokens.Add((m.Value, m.Index + 1));
+        return tokens;
+    }
+}

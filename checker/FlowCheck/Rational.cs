@@ -1,0 +1,51 @@
+using System.Numerics;
+using System.Text.RegularExpressions;
+
+namespace FlowCheck;
+
+/// <summary>An exact rational in lowest terms with a positive denominator.</summary>
+public readonly record struct Rational
+{
+    static readonly Regex Weight = new(@"^(-?)([0-9]+)(?:/([0-9]+)|\.([0-9]+))?\z");
+
+    public BigInteger Num { get; }
+    public BigInteger Den { get; }
+
+    public Rational(BigInteger num, BigInteger den)
+    {
+        if (den.Sign < 0) { num = -num; den = -den; }
+        var gcd = BigInteger.GreatestCommonDivisor(num, den);
+        Num = num / gcd;
+        Den = den / gcd;
+    }
+
+    public static readonly Rational Zero = new(0, 1);
+    public static readonly Rational One = new(1, 1);
+
+    public static Rational operator +(Rational a, Rational b) => new(a.Num * b.Den + b.Num * a.Den, a.Den * b.Den);
+    public static Rational operator *(Rational a, Rational b) => new(a.Num * b.Num, a.Den * b.Den);
+
+    /// <summary>The canonical text: "a" when the denominator is 1, else "a/b".</summary>
+    public override string ToString() => Den.IsOne ? Num.ToString() : $"{Num}/{Den}";
+
+    /// <summary>Reads a weight of the graph file grammar: "-3", "1/2", "0.25"; null when malformed.</summary>
+    public static Rational? ParseWeight(string text)
+    {
+        var m = Weight.Match(text);
+        if (!m.Success) return null;
+        var sign = m.Groups[1].Length == 1 ? BigInteger.MinusOne : BigInteger.One;
+        var whole = sign * BigInteger.Parse(m.Groups[2].Value);
+        if (m.Groups[3].Success)
+        {
+            var den = BigInteger.Parse(m.Groups[3].Value);
+            return den.IsZero ? null : new Rational(whole, den);
+        }
+        if (!m.Groups[4].Success) return new Rational(whole, 1);
+        var scale = BigInteger.Pow(10, m.Groups[4].Length);
+        return new Rational(whole * scale + sign * BigInteger.Parse(m.Groups[4].Value), scale);
+    }
+
+    /// <summary>Reads a rational only if the text is exactly its canonical form; null otherwise.</summary>
+    public static Rational? ParseCanonical(string text) =>
+        ParseWeight(text) is { } r && r.ToString() == text ? r : null;
+}
