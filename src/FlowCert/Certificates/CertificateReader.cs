@@ -124,10 +124,7 @@ public static class CertificateReader
         return new FlowResult
         {
             Graph = graph, Field = field, Kind = kind, Rounds = rounds, Corrections = corrections,
-            Obstruction = obstruction, VanishedEdges = VanishedIn(graph, field),
+            Obstruction = obstruction, VanishedEdges = VanishingEdges.In(graph, field),
         };
     }
-
-    private static IReadOnlyList<WeightedEdge> VanishedIn(OpenGraph g, FieldSpec field)
-        => field.IsRationals ? [] : g.Edges.Where(e => e.Weight.Numerator % field.Prime == 0).ToList();
 }
