@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.CommandLine.Parsing;
 
 namespace FlowCert.Cli;
 
@@ -19,10 +20,12 @@ public static class PathSymbols
     public static void RefuseEmpty(ParseResult parsed)
     {
         var command = parsed.CommandResult.Command;
+        // Look only at what was typed: asking for the value of a required symbol that is absent (as with
+        // --help) would throw.
         foreach (var argument in command.Arguments.OfType<PathArgument>())
-            if (parsed.GetValue(argument) is "") throw Empty(argument.Name);
+            if (parsed.GetResult(argument) is { Tokens: [{ Value: "" }, ..] }) throw Empty(argument.Name);
         foreach (var option in command.Options.OfType<PathOption>())
-            if (parsed.GetValue(option) is "") throw Empty(option.Name);
+            if (parsed.GetResult(option) is { Tokens: [{ Value: "" }, ..] }) throw Empty(option.Name);
     }
 
     private static UserInputException Empty(string name) => new($"{name} is empty: give a file or folder name.");
