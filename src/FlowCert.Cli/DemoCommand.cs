@@ -29,22 +29,21 @@ public static class DemoCommand
             o.WriteLine($"{design.Name}: {g.NodeCount} nodes, {g.Edges.Count} edges, inputs {string.Join(" ", g.SortedInputs.Select(v => g.Names[v]))}, outputs {string.Join(" ", g.SortedOutputs.Select(v => g.Names[v]))}");
             foreach (var field in design.Fields)
             {
+                FlowResult[] results;
+                try { results = DemoScenario.Kinds.Select(k => FlowSolver.Solve(g, field, k)).ToArray(); }
+                catch (WeightNotInFieldException e) { o.WriteLine($"  {field.Name,-3} not defined: {e.Message}"); continue; }
                 var cells = new List<string>();
-                foreach (var kind in DemoScenario.Kinds)
+                foreach (var r in results)
                 {
-                    FlowResult r;
-                    try { r = FlowSolver.Solve(g, field, kind); }
-                    catch (WeightNotInFieldException e) { cells.Add($"{CertificateWriter.KindName(kind)}: undefined ({e.Message})"); continue; }
-                    var file = $"{design.Name}.{field.Name}.{CertificateWriter.KindName(kind)}.json";
-                    SafeFile.WriteAllText(Path.Combine(outDir, file), CertificateWriter.Write(r));
+                    var kind = CertificateWriter.KindName(r.Kind);
+                    SafeFile.WriteAllText(Path.Combine(outDir, $"{design.Name}.{field.Name}.{kind}.json"), CertificateWriter.Write(r));
                     written++;
                     cells.Add(r.Obstruction is { } b
-                        ? $"{CertificateWriter.KindName(kind)}: no flow, blocked {{{string.Join(" ", b.Nodes.Select(v => g.Names[v]))}}}"
-                        : $"{CertificateWriter.KindName(kind)}: depth {r.Depth}");
-                    if (kind == FlowKind.General && r.VanishedEdges.Count > 0)
-                        cells[^1] += $" ({r.VanishedEdges.Count} edge(s) vanish in {field.Name})";
+                        ? $"{kind}: no flow, blocked {{{string.Join(" ", b.Nodes.Select(v => g.Names[v]))}}}"
+                        : $"{kind}: depth {r.Depth}");
                 }
-                o.WriteLine($"  {field.Name,-3} {string.Join(" | ", cells)}");
+                var vanished = results[0].VanishedEdges.Count;
+                o.WriteLine($"  {field.Name,-3} {string.Join(" | ", cells)}{(vanished > 0 ? $"   ({vanished} edge(s) vanish in {field.Name})" : "")}");
             }
             o.WriteLine();
         }

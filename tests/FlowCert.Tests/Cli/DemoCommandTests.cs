@@ -45,7 +45,7 @@ public class DemoCommandTests
         Assert.Contains($"{certificates.Count} certificates written", run.Stdout);
         // loop-wire has weights -1/2 and 0.75: it has no meaning in F2, and the summary says so.
         Assert.DoesNotContain("demo/loop-wire.F2.general.json", certificates);
-        Assert.Contains("undefined (edge t1 t2 has weight -1/2, which has no value in F2", run.Stdout);
+        Assert.Contains("F2  not defined: edge t1 t2 has weight -1/2, which has no value in F2", run.Stdout);
 
         foreach (var cert in certificates)
         {
