@@ -60,6 +60,7 @@ public sealed class BitElimination : IEliminationResult<ulong>
     private static bool Get(ulong[] row, int k) => (row[k >> 6] >> (k & 63) & 1) != 0;
     private static void Set(ulong[] row, int k) => row[k >> 6] |= 1UL << (k & 63);
 
+    /// <inheritdoc/>
     public int Rank => pivots.Count;
 
     private SparseVector<ulong> TransformRow(int r)
@@ -69,9 +70,11 @@ public sealed class BitElimination : IEliminationResult<ulong>
         return new SparseVector<ulong>(idx.ToArray(), Enumerable.Repeat(1UL, idx.Count).ToArray());
     }
 
+    /// <inheritdoc/>
     public IReadOnlyList<SparseVector<ulong>> LeftKernel()
         => Enumerable.Range(0, m).Where(r => !isPivotRow[r]).Select(TransformRow).ToList();
 
+    /// <inheritdoc/>
     public Dictionary<int, SparseVector<ulong>> SolveUnitVectors()
     {
         var blocked = new bool[m];

@@ -9,10 +9,13 @@ namespace FlowCert.Algebra;
 public sealed class BitMatrix
 {
     private readonly ulong[][] rows;
+    /// <summary>Number of rows.</summary>
     public int Rows { get; }
+    /// <summary>Number of columns.</summary>
     public int Columns { get; }
     private int Words => (Columns + 63) >> 6;
 
+    /// <summary>A zero matrix of the given size.</summary>
     public BitMatrix(int rows, int columns)
     {
         Rows = rows; Columns = columns;
@@ -20,12 +23,14 @@ public sealed class BitMatrix
         for (int i = 0; i < rows; i++) this.rows[i] = new ulong[Words];
     }
 
+    /// <summary>The entry in row i, column j (true is 1).</summary>
     public bool this[int i, int j]
     {
         get => (rows[i][j >> 6] >> (j & 63) & 1) != 0;
         set { if (value) rows[i][j >> 6] |= 1UL << (j & 63); else rows[i][j >> 6] &= ~(1UL << (j & 63)); }
     }
 
+    /// <summary>An independent copy.</summary>
     public BitMatrix Clone()
     {
         var m = new BitMatrix(Rows, Columns);
@@ -58,6 +63,7 @@ public sealed class BitMatrix
         return (m, pivots.ToArray());
     }
 
+    /// <summary>The rank over F_2.</summary>
     public int Rank() => RowReduce().PivotColumns.Length;
 
     /// <summary>A solution x of A x = b (free variables zero), or null when there is none.</summary>

@@ -8,17 +8,22 @@ public sealed class DenseMatrix<T, TField> where T : struct where TField : struc
 {
     private readonly TField f;
     private readonly T[,] a;
+    /// <summary>Number of rows.</summary>
     public int Rows { get; }
+    /// <summary>Number of columns.</summary>
     public int Columns { get; }
 
+    /// <summary>A zero matrix of the given size over the field.</summary>
     public DenseMatrix(TField field, int rows, int columns)
     {
         f = field; Rows = rows; Columns = columns; a = new T[rows, columns];
         for (int i = 0; i < rows; i++) for (int j = 0; j < columns; j++) a[i, j] = f.Zero;
     }
 
+    /// <summary>The entry in row i, column j.</summary>
     public T this[int i, int j] { get => a[i, j]; set => a[i, j] = value; }
 
+    /// <summary>An independent copy.</summary>
     public DenseMatrix<T, TField> Clone()
     {
         var m = new DenseMatrix<T, TField>(f, Rows, Columns);
@@ -58,6 +63,7 @@ public sealed class DenseMatrix<T, TField> where T : struct where TField : struc
         for (int j = 0; j < Columns; j++) (a[i, j], a[k, j]) = (a[k, j], a[i, j]);
     }
 
+    /// <summary>The rank over the field.</summary>
     public int Rank() => RowReduce().PivotColumns.Length;
 
     /// <summary>A solution x of A x = b (free variables zero), or null when there is none.</summary>

@@ -9,7 +9,9 @@ public sealed record FieldSpec
     public ulong Prime { get; }
     private FieldSpec(ulong prime) => Prime = prime;
 
+    /// <summary>The field Q of rationals.</summary>
     public static readonly FieldSpec Rationals = new(0);
+    /// <summary>True for Q, false for F_p.</summary>
     public bool IsRationals => Prime == 0;
 
     /// <summary>F_p; throws <see cref="ArgumentException"/> unless p is a prime below 2^62.</summary>
@@ -21,6 +23,7 @@ public sealed record FieldSpec
 
     /// <summary>The certificate name: <c>Q</c>, <c>F2</c>, <c>F3</c>, ...</summary>
     public string Name => IsRationals ? "Q" : "F" + Prime.ToString(CultureInfo.InvariantCulture);
+    /// <summary>The certificate name (<see cref="Name"/>).</summary>
     public override string ToString() => Name;
 
     /// <summary>
@@ -52,6 +55,7 @@ public sealed record FieldSpec
 /// <summary>Generic code to run over whichever field a <see cref="FieldSpec"/> names.</summary>
 public interface IFieldVisitor<out TResult>
 {
+    /// <summary>Runs over the field <paramref name="field"/> with element type <typeparamref name="T"/>.</summary>
     TResult Visit<T, TField>(TField field) where T : struct where TField : struct, IField<T>;
 }
 

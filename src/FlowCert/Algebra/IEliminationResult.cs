@@ -9,14 +9,18 @@ namespace FlowCert.Algebra;
 /// </summary>
 public interface IEliminationResult<T> where T : struct
 {
+    /// <summary>The rank of B.</summary>
     int Rank { get; }
+    /// <summary>A basis of the left kernel {y : y^T B = 0}, as vectors over the rows.</summary>
     IReadOnlyList<SparseVector<T>> LeftKernel();
+    /// <summary>For each row r whose unit vector e_r lies in the column space, the canonical solution c of B c = e_r, keyed by r.</summary>
     Dictionary<int, SparseVector<T>> SolveUnitVectors();
 }
 
 /// <summary>Chooses how to eliminate a block: sparse rows in general, packed bits for dense blocks over F_2.</summary>
 public static class Elimination
 {
+    /// <summary>Eliminates the matrix whose rows are <paramref name="rows"/> over <paramref name="field"/>.</summary>
     public static IEliminationResult<T> Run<T, TField>(TField field, IReadOnlyList<SparseVector<T>> rows)
         where T : struct where TField : struct, IField<T>
     {

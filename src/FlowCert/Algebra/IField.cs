@@ -8,13 +8,21 @@ namespace FlowCert.Algebra;
 /// </summary>
 public interface IField<T> where T : struct
 {
+    /// <summary>The additive identity.</summary>
     T Zero { get; }
+    /// <summary>The multiplicative identity.</summary>
     T One { get; }
+    /// <summary>True when a is zero.</summary>
     bool IsZero(T a);
+    /// <summary>True when a and b are the same element.</summary>
     bool AreEqual(T a, T b);
+    /// <summary>a + b.</summary>
     T Add(T a, T b);
+    /// <summary>a - b.</summary>
     T Subtract(T a, T b);
+    /// <summary>-a.</summary>
     T Negate(T a);
+    /// <summary>a * b.</summary>
     T Multiply(T a, T b);
     /// <summary>The multiplicative inverse; throws on zero.</summary>
     T Inverse(T a);

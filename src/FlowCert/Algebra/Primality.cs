@@ -10,6 +10,7 @@ public static class Primality
     /// <summary>a * b mod m without overflow.</summary>
     public static ulong MulMod(ulong a, ulong b, ulong m) => (ulong)((UInt128)a * b % m);
 
+    /// <summary>b^e mod m by square-and-multiply.</summary>
     public static ulong PowMod(ulong b, ulong e, ulong m)
     {
         ulong result = 1 % m;

@@ -15,15 +15,24 @@ public readonly struct PrimeField : IField<ulong>
         P = p;
     }
 
+    /// <inheritdoc/>
     public ulong Zero => 0;
+    /// <inheritdoc/>
     public ulong One => 1;
+    /// <inheritdoc/>
     public bool IsZero(ulong a) => a == 0;
+    /// <inheritdoc/>
     public bool AreEqual(ulong a, ulong b) => a == b;
+    /// <inheritdoc/>
     public ulong Add(ulong a, ulong b) { var s = a + b; return s >= P ? s - P : s; }
+    /// <inheritdoc/>
     public ulong Subtract(ulong a, ulong b) => a >= b ? a - b : a + P - b;
+    /// <inheritdoc/>
     public ulong Negate(ulong a) => a == 0 ? 0 : P - a;
+    /// <inheritdoc/>
     public ulong Multiply(ulong a, ulong b) => Primality.MulMod(a, b, P);
 
+    /// <inheritdoc/>
     public ulong Inverse(ulong a)
     {
         if (a == 0) throw new DivideByZeroException("zero has no inverse in F_" + P);
@@ -46,6 +55,7 @@ public readonly struct PrimeField : IField<ulong>
         return (ulong)(r.Sign < 0 ? r + P : r);
     }
 
+    /// <inheritdoc/>
     public ulong FromRational(Rational r)
     {
         var den = FromInteger(r.Denominator);
@@ -53,8 +63,10 @@ public readonly struct PrimeField : IField<ulong>
         return Multiply(FromInteger(r.Numerator), Inverse(den));
     }
 
+    /// <inheritdoc/>
     public string Format(ulong a) => a.ToString(System.Globalization.CultureInfo.InvariantCulture);
 
+    /// <inheritdoc/>
     public bool TryParse(string text, out ulong value)
     {
         value = 0;

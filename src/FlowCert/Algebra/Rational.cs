@@ -12,7 +12,9 @@ public readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
     /// <summary>The denominator, always positive.</summary>
     public BigInteger Denominator => denominatorMinusOne + 1;
 
+    /// <summary>The rational 0.</summary>
     public static readonly Rational Zero = new(BigInteger.Zero, BigInteger.One, reduced: true);
+    /// <summary>The rational 1.</summary>
     public static readonly Rational One = new(BigInteger.One, BigInteger.One, reduced: true);
 
     private Rational(BigInteger num, BigInteger den, bool reduced)
@@ -32,40 +34,56 @@ public readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
         return g.IsOne ? new Rational(num, den, true) : new Rational(num / g, den / g, true);
     }
 
+    /// <summary>The integer n as a rational.</summary>
     public static implicit operator Rational(long n) => new(n, BigInteger.One, true);
+    /// <summary>The integer n as a rational.</summary>
     public static Rational FromInteger(BigInteger n) => new(n, BigInteger.One, true);
 
+    /// <summary>True when the value is 0.</summary>
     public bool IsZero => Numerator.IsZero;
+    /// <summary>-1, 0 or 1 by the sign of the value.</summary>
     public int Sign => Numerator.Sign;
 
+    /// <summary>Exact sum.</summary>
     public static Rational operator +(Rational a, Rational b)
     {
         if (a.Denominator.IsOne && b.Denominator.IsOne) return new Rational(a.Numerator + b.Numerator, BigInteger.One, true);
         return Create(a.Numerator * b.Denominator + b.Numerator * a.Denominator, a.Denominator * b.Denominator);
     }
 
+    /// <summary>Exact difference.</summary>
     public static Rational operator -(Rational a, Rational b) => a + (-b);
+    /// <summary>Negation.</summary>
     public static Rational operator -(Rational a) => new(-a.Numerator, a.Denominator, true);
 
+    /// <summary>Exact product.</summary>
     public static Rational operator *(Rational a, Rational b)
     {
         if (a.Denominator.IsOne && b.Denominator.IsOne) return new Rational(a.Numerator * b.Numerator, BigInteger.One, true);
         return Create(a.Numerator * b.Numerator, a.Denominator * b.Denominator);
     }
 
+    /// <summary>Exact quotient; throws <see cref="DivideByZeroException"/> when b is zero.</summary>
     public static Rational operator /(Rational a, Rational b)
     {
         if (b.IsZero) throw new DivideByZeroException("division by the rational zero");
         return Create(a.Numerator * b.Denominator, a.Denominator * b.Numerator);
     }
 
+    /// <summary>1 / this; throws <see cref="DivideByZeroException"/> on zero.</summary>
     public Rational Reciprocal() => One / this;
 
+    /// <summary>True when both are the same rational.</summary>
     public bool Equals(Rational other) => Numerator == other.Numerator && Denominator == other.Denominator;
+    /// <summary>True when obj is a <see cref="Rational"/> with the same value.</summary>
     public override bool Equals(object? obj) => obj is Rational r && Equals(r);
+    /// <summary>A hash consistent with <see cref="Equals(Rational)"/>.</summary>
     public override int GetHashCode() => HashCode.Combine(Numerator, Denominator);
+    /// <summary>Compares by numeric value.</summary>
     public int CompareTo(Rational other) => (Numerator * other.Denominator).CompareTo(other.Numerator * Denominator);
+    /// <summary>Value equality.</summary>
     public static bool operator ==(Rational a, Rational b) => a.Equals(b);
+    /// <summary>Value inequality.</summary>
     public static bool operator !=(Rational a, Rational b) => !a.Equals(b);
 
     /// <summary>Canonical text: <c>a</c> or <c>a/b</c> with b &gt; 1.</summary>

@@ -3,12 +3,18 @@ namespace FlowCert.Algebra;
 /// <summary>An immutable sparse vector: strictly increasing indices and their non-zero values.</summary>
 public readonly struct SparseVector<T> where T : struct
 {
+    /// <summary>The positions of the non-zero entries, strictly increasing.</summary>
     public readonly int[] Indices;
+    /// <summary>The non-zero values, aligned with <see cref="Indices"/>.</summary>
     public readonly T[] Values;
 
+    /// <summary>Wraps the arrays as given (no copy, no check); indices must be strictly increasing and values non-zero.</summary>
     public SparseVector(int[] indices, T[] values) { Indices = indices; Values = values; }
+    /// <summary>The zero vector.</summary>
     public static SparseVector<T> Empty => new([], []);
+    /// <summary>The vector with <paramref name="one"/> at <paramref name="index"/> and zero elsewhere.</summary>
     public static SparseVector<T> Unit(int index, T one) => new([index], [one]);
+    /// <summary>Number of non-zero entries.</summary>
     public int Count => Indices.Length;
 
     /// <summary>The entry at index, or zero.</summary>
@@ -46,6 +52,7 @@ public readonly struct SparseVector<T> where T : struct
         return new SparseVector<T>(idx, val);
     }
 
+    /// <summary>factor * this; the caller passes a non-zero factor (no zeros are dropped).</summary>
     public SparseVector<T> Scale<TField>(TField f, T factor) where TField : struct, IField<T>
     {
         var val = new T[Count];
