@@ -10,8 +10,11 @@ namespace FlowCert.Certificates;
 public sealed class CertificateFormatException(string file, string problem, int line = 0, int column = 0)
     : Exception(line > 0 ? $"{file}:{line}:{column}: {problem}" : $"{file}: {problem}")
 {
+    /// <summary>The file name the problem is reported against.</summary>
     public string File { get; } = file;
+    /// <summary>The 1-based line of the problem, or 0 when unknown.</summary>
     public int Line { get; } = line;
+    /// <summary>The 1-based column of the problem, or 0 when unknown.</summary>
     public int Column { get; } = column;
 }
 

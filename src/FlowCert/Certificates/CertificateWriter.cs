@@ -11,8 +11,11 @@ namespace FlowCert.Certificates;
 /// </summary>
 public static class CertificateWriter
 {
+    /// <summary>The value of the certificate's <c>format</c> key.</summary>
     public const string Format = "flowcert-certificate";
+    /// <summary>The value of the certificate's <c>version</c> key.</summary>
     public const int Version = 1;
+    /// <summary>The producer name written into every certificate.</summary>
     public const string ProducerName = "flowcert";
     /// <summary>Written into every certificate; kept in step with the Version in Directory.Build.props.</summary>
     public const string ProducerVersion = "0.1.0";
