@@ -8,6 +8,7 @@ namespace FlowCert.Demo;
 /// <summary>One design of the built-in demo and the analyses run on it.</summary>
 public sealed record DemoDesign(string Name, string Text, IReadOnlyList<FieldSpec> Fields)
 {
+    /// <summary>The design parsed as an open graph (parsed anew on every access).</summary>
     public OpenGraph Graph => OgraphReader.Parse(Text, Name + ".ograph");
 }
 
@@ -18,8 +19,10 @@ public sealed record DemoDesign(string Name, string Text, IReadOnlyList<FieldSpe
 /// </summary>
 public static class DemoScenario
 {
+    /// <summary>The flow kinds each design is analysed for, generalized first.</summary>
     public static readonly FlowKind[] Kinds = [FlowKind.General, FlowKind.Causal];
 
+    /// <summary>The demo designs, each with the fields it is analysed over (Q, F_2, F_3, F_5).</summary>
     public static IReadOnlyList<DemoDesign> Designs()
     {
         FieldSpec[] all = [FieldSpec.Rationals, FieldSpec.PrimeField(2), FieldSpec.PrimeField(3), FieldSpec.PrimeField(5)];
