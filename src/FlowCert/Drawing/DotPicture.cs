@@ -14,6 +14,7 @@ namespace FlowCert.Drawing;
 /// </summary>
 public static class DotPicture
 {
+    /// <summary>The DOT text of the graph with the result's flow or blocked set, if any, titled <paramref name="title"/>.</summary>
     public static string Write(OpenGraph g, FlowResult? result, string title)
     {
         var blocked = result?.Obstruction?.Nodes.ToHashSet() ?? [];

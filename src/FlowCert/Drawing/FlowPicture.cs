@@ -23,17 +23,22 @@ public sealed class FlowPicture
     /// <summary>Graphs with more nodes than this are drawn without names, weights or coefficients.</summary>
     public const int MaxLabelledNodes = 60;
 
+    /// <summary>The graph drawn.</summary>
     public required OpenGraph Graph { get; init; }
     /// <summary>The flow or obstruction to draw, or null for the graph alone.</summary>
     public required FlowResult? Result { get; init; }
+    /// <summary>The title line (see <see cref="TitleFor"/>).</summary>
     public required string Title { get; init; }
+    /// <summary>How the nodes were placed.</summary>
     public required PictureArrangement Arrangement { get; init; }
     /// <summary>Node centres in pixels, by node index.</summary>
     public required double[] X { get; init; }
+    /// <summary>Node centres' heights in pixels (downwards), by node index.</summary>
     public required double[] Y { get; init; }
     /// <summary>Column headings (centre x and text), empty when the layout has no columns.</summary>
     public required IReadOnlyList<(double X, string Text)> ColumnTitles { get; init; }
 
+    /// <summary>True when the graph is small enough for names, weights and coefficients.</summary>
     public bool ShowLabels => Graph.NodeCount <= MaxLabelledNodes;
 
     /// <summary>The title line of a picture: the file's name and what the certificate says.</summary>

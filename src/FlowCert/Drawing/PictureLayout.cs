@@ -12,14 +12,17 @@ namespace FlowCert.Drawing;
 /// </summary>
 public static class PictureLayout
 {
+    /// <summary>Spacing and margins in pixels: between columns, between rows, per unit of a position hint, left and top margins.</summary>
     public const double ColumnGap = 120, RowGap = 58, HintUnit = 64, Left = 70, Top = 112;
 
     /// <summary>Small graphs are drawn roomier, so that crossing arrows and their labels stay apart.</summary>
     public const int RoomyNodes = 16;
+    /// <summary>The factor applied to the spacing of graphs with at most <see cref="RoomyNodes"/> nodes.</summary>
     public const double RoomyScale = 1.5;
 
     private static double Scale(OpenGraph g) => g.NodeCount <= RoomyNodes ? RoomyScale : 1.0;
 
+    /// <summary>Places the nodes of <paramref name="g"/>: by the result's rounds when it has a flow, else by hints or distance from the inputs.</summary>
     public static FlowPicture Arrange(OpenGraph g, FlowResult? result, string title)
     {
         if (result is { HasFlow: true })

@@ -22,6 +22,7 @@ public static class SvgPicture
     /// <summary>Fill and outline of the nodes of a blocked set.</summary>
     public const string BlockedFill = "#fbe0e0", BlockedStroke = "#c62828";
 
+    /// <summary>The SVG document of a laid-out picture, legend included.</summary>
     public static string Write(FlowPicture p)
     {
         var g = p.Graph;
