@@ -12,13 +12,20 @@ public sealed class WeightNotInFieldException(string message) : Exception(messag
 /// </summary>
 public sealed class FieldGraph<T, TField> where T : struct where TField : struct, IField<T>
 {
+    /// <summary>The field the weights were mapped into.</summary>
     public TField Field { get; }
+    /// <summary>The open graph this adjacency comes from.</summary>
     public OpenGraph Graph { get; }
+    /// <summary>Which field <see cref="Field"/> is.</summary>
     public FieldSpec Spec { get; }
+    /// <summary>Sorted neighbour indices of each node, over edges whose weight is non-zero in the field.</summary>
     public int[][] Neighbours { get; }
+    /// <summary>The non-zero field weights aligned with <see cref="Neighbours"/>.</summary>
     public T[][] Weights { get; }
+    /// <summary>Edges whose weight is zero in the field, in the graph's edge order.</summary>
     public IReadOnlyList<WeightedEdge> Vanished { get; }
 
+    /// <summary>Maps the weights of <paramref name="graph"/> into <paramref name="field"/>; throws <see cref="WeightNotInFieldException"/> naming the edge when a weight has no value there.</summary>
     public FieldGraph(OpenGraph graph, TField field, FieldSpec spec)
     {
         Graph = graph; Field = field; Spec = spec;

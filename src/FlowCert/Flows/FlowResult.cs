@@ -21,8 +21,11 @@ public sealed record BlockedSet(IReadOnlyList<int> Nodes, IReadOnlyList<NodeVect
 /// <summary>The outcome of a flow search: a schedule with correction vectors, or an obstruction.</summary>
 public sealed record FlowResult
 {
+    /// <summary>The graph analysed.</summary>
     public required OpenGraph Graph { get; init; }
+    /// <summary>The field the analysis ran over.</summary>
     public required FieldSpec Field { get; init; }
+    /// <summary>The flow condition asked for.</summary>
     public required FlowKind Kind { get; init; }
     /// <summary>Measured nodes by round, round 1 first, each round sorted; empty when there is no flow.</summary>
     public required IReadOnlyList<IReadOnlyList<int>> Rounds { get; init; }
@@ -33,6 +36,7 @@ public sealed record FlowResult
     /// <summary>Edges whose weight is zero in the chosen field (they vanish there).</summary>
     public required IReadOnlyList<WeightedEdge> VanishedEdges { get; init; }
 
+    /// <summary>True when a flow exists (there is no obstruction).</summary>
     public bool HasFlow => Obstruction is null;
     /// <summary>The number of rounds (minimal among flows of this kind over this field).</summary>
     public int Depth => Rounds.Count;
