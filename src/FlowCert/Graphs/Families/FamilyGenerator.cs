@@ -19,6 +19,7 @@ public static class FamilyGenerator
     /// <summary>The most edges (n d / 2) of a random d-regular graph, whose pairing holds n d points at once.</summary>
     public const long MaxRegularEdges = 8_000_000;
 
+    /// <summary>The families the generator knows, with their size forms, lattice directions and descriptions.</summary>
     public static readonly IReadOnlyList<FamilyInfo> Catalog =
     [
         new("line", "N", ["h"], true, "a path of N nodes; periodic: a ring"),

@@ -7,6 +7,7 @@ namespace FlowCert.Graphs.Families;
 /// </summary>
 public sealed record FamilyRequest
 {
+    /// <summary>The family's name, one of <see cref="FamilyGenerator.Catalog"/>.</summary>
     public required string Family { get; init; }
     /// <summary><c>N</c> (line, random, regular), <c>RxC</c> (rows by columns) or <c>XxYxZ</c> (cubic).</summary>
     public required string Size { get; init; }
@@ -22,6 +23,7 @@ public sealed record FamilyRequest
     public int? OutputCount { get; init; }
     /// <summary>Seed of the random structure and the random weights.</summary>
     public ulong Seed { get; init; }
+    /// <summary>How edge weights are chosen (all 1 unless asked otherwise).</summary>
     public WeightRule Weights { get; init; } = WeightRule.Unit;
 }
 

@@ -16,9 +16,13 @@ public sealed class GraphDraft(string family, IReadOnlyList<string> directions)
     public string Family { get; } = family;
     /// <summary>The direction tags edges may carry (empty for random graphs).</summary>
     public IReadOnlyList<string> Directions { get; } = directions;
+    /// <summary>Input node names, in the order added.</summary>
     public List<string> Inputs { get; } = [];
+    /// <summary>Output node names, in the order added.</summary>
     public List<string> Outputs { get; } = [];
+    /// <summary>Number of nodes added so far.</summary>
     public int NodeCount => nodes.Count;
+    /// <summary>Number of edges added so far.</summary>
     public int EdgeCount => edges.Count;
 
     /// <summary>Adds a node with a drawing position.</summary>
