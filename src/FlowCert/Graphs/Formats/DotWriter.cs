@@ -12,6 +12,7 @@ public static class DotWriter
     /// <summary>Points per unit of an <c>at</c> coordinate.</summary>
     public const decimal PointsPerUnit = 72;
 
+    /// <summary>The DOT text of the graph.</summary>
     public static string Write(OpenGraph g)
     {
         var sb = new StringBuilder();

@@ -11,7 +11,9 @@ namespace FlowCert.Graphs.Formats;
 public sealed class JsonSource
 {
     private readonly string[] lines;
+    /// <summary>The file name used in messages.</summary>
     public string FileName { get; }
+    /// <summary>The parsed JSON value.</summary>
     public JToken Root { get; }
 
     private JsonSource(string fileName, string[] lines, JToken root) { FileName = fileName; this.lines = lines; Root = root; }

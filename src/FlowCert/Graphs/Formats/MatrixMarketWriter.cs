@@ -13,6 +13,7 @@ namespace FlowCert.Graphs.Formats;
 /// </summary>
 public static class MatrixMarketWriter
 {
+    /// <summary>The Matrix Market text of the graph; throws <see cref="GraphFileException"/> on a weight without a finite decimal form.</summary>
     public static string Write(OpenGraph g)
     {
         var order = NaturalNameOrder.Sort(g);

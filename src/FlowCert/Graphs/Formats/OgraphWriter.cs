@@ -10,6 +10,7 @@ namespace FlowCert.Graphs.Formats;
 /// </summary>
 public static class OgraphWriter
 {
+    /// <summary>The <c>.ograph</c> text of the graph, position hints included.</summary>
     public static string Write(OpenGraph g)
     {
         var sb = new StringBuilder(CanonicalForm.Write(g));
