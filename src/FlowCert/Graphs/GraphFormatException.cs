@@ -4,8 +4,12 @@ namespace FlowCert.Graphs;
 public sealed class GraphFormatException(string file, int line, int column, string problem)
     : Exception($"{file}:{line}:{column}: {problem}")
 {
+    /// <summary>The file name the problem is reported against.</summary>
     public string File { get; } = file;
+    /// <summary>The 1-based line of the problem.</summary>
     public int Line { get; } = line;
+    /// <summary>The 1-based column of the problem.</summary>
     public int Column { get; } = column;
+    /// <summary>What is wrong, without the location.</summary>
     public string Problem { get; } = problem;
 }

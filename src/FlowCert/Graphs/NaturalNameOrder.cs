@@ -14,6 +14,7 @@ public sealed class NaturalNameOrder : IComparer<string>
 
     private NaturalNameOrder() { }
 
+    /// <summary>Compares two names in natural order (null first).</summary>
     public int Compare(string? x, string? y)
     {
         if (ReferenceEquals(x, y)) return 0;
