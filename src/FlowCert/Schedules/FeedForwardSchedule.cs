@@ -11,6 +11,7 @@ namespace FlowCert.Schedules;
 /// </summary>
 public sealed record LinearForm(IReadOnlyList<(int Node, string Coefficient)> Terms)
 {
+    /// <summary>True when the form has no terms (it is 0).</summary>
     public bool IsZero => Terms.Count == 0;
 }
 
@@ -27,6 +28,7 @@ public sealed record TriggeredCorrection(int Source, int Target, string X, strin
 /// </summary>
 public sealed record NodeFrame(int Node, int Round, LinearForm X, LinearForm Z)
 {
+    /// <summary>True for an output's final frame (round 0).</summary>
     public bool IsOutput => Round == 0;
 }
 
@@ -53,8 +55,11 @@ public sealed record ScheduleStatistics(
 /// </summary>
 public sealed record FeedForwardSchedule
 {
+    /// <summary>The graph the schedule runs on.</summary>
     public required OpenGraph Graph { get; init; }
+    /// <summary>The field of the outcomes and coefficients.</summary>
     public required FieldSpec Field { get; init; }
+    /// <summary>The kind of flow the schedule comes from.</summary>
     public required FlowKind Kind { get; init; }
     /// <summary>Measured nodes by round, round 1 first, each round sorted.</summary>
     public required IReadOnlyList<IReadOnlyList<int>> Rounds { get; init; }
@@ -62,6 +67,7 @@ public sealed record FeedForwardSchedule
     public required IReadOnlyList<TriggeredCorrection> Corrections { get; init; }
     /// <summary>Frames of measured nodes after round 1 (measurement order), then of the outputs (sorted).</summary>
     public required IReadOnlyList<NodeFrame> Frames { get; init; }
+    /// <summary>Counts of the feed-forward the schedule needs.</summary>
     public required ScheduleStatistics Statistics { get; init; }
     /// <summary>Edges whose weight is 0 in the field (<see cref="VanishingEdges"/>): every format reports them.</summary>
     public required IReadOnlyList<WeightedEdge> VanishedEdges { get; init; }

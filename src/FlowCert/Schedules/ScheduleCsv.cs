@@ -8,8 +8,10 @@ namespace FlowCert.Schedules;
 /// </summary>
 public static class ScheduleCsv
 {
+    /// <summary>The header row of the table.</summary>
     public const string Header = "kind,node,round,source,x,z";
 
+    /// <summary>The CSV text of a schedule.</summary>
     public static string Write(FeedForwardSchedule s)
     {
         var g = s.Graph;

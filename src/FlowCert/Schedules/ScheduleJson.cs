@@ -10,9 +10,12 @@ namespace FlowCert.Schedules;
 /// </summary>
 public static class ScheduleJson
 {
+    /// <summary>The value of the schedule's <c>format</c> key.</summary>
     public const string Format = "flowcert-schedule";
+    /// <summary>The value of the schedule's <c>version</c> key.</summary>
     public const int Version = 1;
 
+    /// <summary>The JSON text of a schedule.</summary>
     public static string Write(FeedForwardSchedule s)
     {
         var g = s.Graph;

@@ -24,6 +24,7 @@ public static class ScheduleText
         return sb.ToString();
     }
 
+    /// <summary>The readable table of a schedule.</summary>
     public static string Write(FeedForwardSchedule s)
     {
         var g = s.Graph;
