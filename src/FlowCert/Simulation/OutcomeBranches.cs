@@ -13,6 +13,7 @@ public sealed record OutcomeBranches
 
     private OutcomeBranches(int? sampleSize, ulong seed) { SampleSize = sampleSize; Seed = seed; }
 
+    /// <summary>Every outcome string.</summary>
     public static OutcomeBranches All { get; } = new(null, 0);
 
     /// <summary>K uniformly random raw-outcome strings (duplicates merged) plus the all-zero one; 0 &lt;= K &lt;= <see cref="MaxExhaustive"/>.</summary>
@@ -20,5 +21,6 @@ public sealed record OutcomeBranches
         => k is >= 0 and <= (int)MaxExhaustive ? new(k, seed)
             : throw new ArgumentOutOfRangeException(nameof(k), $"the sample size must be from 0 to {MaxExhaustive}");
 
+    /// <summary>True when every branch is simulated (no sampling).</summary>
     public bool IsExhaustive => SampleSize is null;
 }

@@ -19,7 +19,9 @@ public sealed class QuditPattern
     /// <summary>The most amplitudes a simulation may hold (2^22).</summary>
     public const long MaxAmplitudes = 1L << 22;
 
+    /// <summary>The graph of the certificate.</summary>
     public OpenGraph Graph { get; }
+    /// <summary>The qudit dimension p.</summary>
     public int Dimension { get; }
     /// <summary>Measured nodes in measurement order (round by round, by index within a round).</summary>
     public IReadOnlyList<int> Order { get; }

@@ -9,10 +9,14 @@ namespace FlowCert.Simulation;
 /// </summary>
 public sealed class QuditRegister
 {
+    /// <summary>The qudit dimension p.</summary>
     public int Dimension { get; }
+    /// <summary>The label of the qudit at each position (node index, or negative for a reference qudit).</summary>
     public IReadOnlyList<int> Labels { get; }
+    /// <summary>The state vector; the qudit at position k has stride p^k.</summary>
     public Complex[] Amplitudes { get; }
 
+    /// <summary>Wraps the amplitudes (no copy); throws when their count is not p to the number of labels.</summary>
     public QuditRegister(int dimension, IReadOnlyList<int> labels, Complex[] amplitudes)
     {
         long size = 1;

@@ -11,12 +11,14 @@ public sealed class SeededRandom
 {
     private ulong s0, s1, s2, s3;
 
+    /// <summary>A generator whose state is drawn from <paramref name="seed"/>.</summary>
     public SeededRandom(ulong seed)
     {
         var seeder = new SplitMix64(seed);
         s0 = seeder.Next(); s1 = seeder.Next(); s2 = seeder.Next(); s3 = seeder.Next();
     }
 
+    /// <summary>The next 64 random bits.</summary>
     public ulong NextUInt64()
     {
         ulong result = ulong.RotateLeft(s1 * 5, 7) * 9;
