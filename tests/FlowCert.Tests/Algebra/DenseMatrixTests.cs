@@ -57,7 +57,7 @@ public class DenseMatrixTests
     }
 
     /// <summary>Every check of this class on one matrix.</summary>
-    public static void CheckElimination<T, TField>(TField f, DenseMatrix<T, TField> a, ulong prime, Random rng, Func<Random, T> sample)
+    internal static void CheckElimination<T, TField>(TField f, DenseMatrix<T, TField> a, ulong prime, Random rng, Func<Random, T> sample)
         where T : struct where TField : struct, IField<T>
     {
         var original = Entries(a);
@@ -188,7 +188,7 @@ public class DenseMatrixTests
         var zero = new DenseMatrix<ulong, PrimeField>(f, 3, 2);
         Assert.Equal(0, zero.Rank());
         Assert.Equal(3, zero.LeftKernel().Count);
-        Assert.Equal([0UL, 0UL], zero.Solve([0, 0, 0]));
+        Assert.Equal([0UL, 0UL], zero.Solve([0, 0, 0])!);
         Assert.Null(zero.Solve([0, 1, 0]));
         var noColumns = new DenseMatrix<ulong, PrimeField>(f, 2, 0);
         Assert.Equal(0, noColumns.Rank());

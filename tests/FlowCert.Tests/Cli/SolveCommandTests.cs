@@ -25,7 +25,7 @@ public class SolveCommandTests
         Assert.Equal("Q", (string?)cert["field"]);
         Assert.Equal("general", (string?)cert["flow"]);
         Assert.Equal(Hashes.Sha256Hex(Designs.WireCanonical), (string?)cert["graphSha256"]);
-        Assert.Equal(["a", "b", "c"], cert["rounds"]!.SelectMany(r => r.Values<string>()).Order().ToArray());
+        Assert.Equal(["a", "b", "c"], cert["rounds"]!.SelectMany(r => r.Values<string>()).Select(n => n!).Order().ToArray());
         w.AssertExactly("wire.ograph", "wire.json");
     }
 
@@ -43,7 +43,7 @@ public class SolveCommandTests
             Assert.Equal("noflow", (string?)cert["verdict"]);
             Assert.Equal(kind, (string?)cert["flow"]);
             Assert.Null(cert["depth"]);
-            Assert.Equal(["in1", "in2"], cert["obstruction"]!["blocked"]!.Values<string>().ToArray());
+            Assert.Equal(["in1", "in2"], cert["obstruction"]!["blocked"]!.Values<string>().Select(n => n!).ToArray());
             if (kind == "general")
             {
                 // Each witness y must satisfy y(in1) * A[in1][mid] + y(in2) * A[in2][mid] = 0 over Q, i.e. y(in1) = -y(in2).
