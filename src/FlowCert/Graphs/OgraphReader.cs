@@ -5,6 +5,11 @@ using FlowCert.Algebra;
 namespace FlowCert.Graphs;
 
 /// <summary>Reads the line-oriented <c>.ograph</c> text format (docs/formats.md).</summary>
+/// <remarks>
+/// The text is scanned in place: a line is a span, a token is a (start, length) pair in it, and only node
+/// names are turned into strings, each once, through one name table. A name already in the table was
+/// checked when it was first seen, so the name pattern runs once per distinct name.
+/// </remarks>
 public static partial class OgraphReader
 {
     [GeneratedRegex(@"^[A-Za-z_][A-Za-z0-9_.:\-]*\z")]
@@ -18,115 +23,220 @@ public static partial class OgraphReader
     /// <summary>Reads a file; errors name the file as given.</summary>
     public static OpenGraph ReadFile(string path) => Parse(File.ReadAllText(path), path);
 
-    private readonly record struct Token(string Text, int Column);
+    /// <summary>Cap on distinct weight texts remembered with their parsed value.</summary>
+    private const int WeightCacheLimit = 4096;
 
     /// <summary>Parses <c>.ograph</c> text. Throws <see cref="GraphFormatException"/> on the first error.</summary>
     public static OpenGraph Parse(string text, string fileName)
     {
-        var nodes = new List<string>();
-        var known = new HashSet<string>(StringComparer.Ordinal);
-        var edges = new List<(string, string, Rational)>();
-        var edgeLines = new Dictionary<(string, string), int>();
-        var inputs = new Dictionary<string, int>(StringComparer.Ordinal);
-        var outputs = new Dictionary<string, int>(StringComparer.Ordinal);
-        var references = new List<(string Name, int Line, int Column, string Keyword)>();
-        var positions = new Dictionary<string, PositionHint>(StringComparer.Ordinal);
-
-        var lines = text.Split('\n');
-        for (int ln = 0; ln < lines.Length; ln++)
-        {
-            int lineNo = ln + 1;
-            var tokens = Tokenize(lines[ln]);
-            if (tokens.Count == 0) continue;
-            GraphFormatException Error(Token t, string problem) => new(fileName, lineNo, t.Column, problem);
-            string Name(Token t)
-            {
-                if (!IsValidName(t.Text))
-                    throw Error(t, $"bad node name '{t.Text}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
-                return t.Text;
-            }
-            void Declare(string n) { if (known.Add(n)) nodes.Add(n); }
-
-            var kw = tokens[0];
-            switch (kw.Text)
-            {
-                case "input":
-                case "output":
-                    var target = kw.Text == "input" ? inputs : outputs;
-                    foreach (var t in tokens.Skip(1))
-                    {
-                        var n = Name(t);
-                        if (target.TryGetValue(n, out var first))
-                            throw Error(t, $"node {n} is listed twice as {kw.Text} (lines {first} and {lineNo})");
-                        target[n] = lineNo;
-                        references.Add((n, lineNo, t.Column, kw.Text));
-                    }
-                    break;
-                case "node":
-                    if (tokens.Count < 2) throw Error(kw, "'node' needs at least one node name");
-                    foreach (var t in tokens.Skip(1)) Declare(Name(t));
-                    break;
-                case "edge":
-                {
-                    if (tokens.Count is < 3 or > 4)
-                        throw Error(tokens.Count > 4 ? tokens[4] : kw, "'edge' takes two node names and an optional weight");
-                    var (u, v) = (Name(tokens[1]), Name(tokens[2]));
-                    if (u == v) throw Error(tokens[2], $"self-loop on node {u}: a graph state has no edge from a node to itself");
-                    var w = Rational.One;
-                    if (tokens.Count == 4)
-                    {
-                        if (!Rational.TryParse(tokens[3].Text, out w))
-                            throw Error(tokens[3], $"bad weight '{tokens[3].Text}': write an integer, a/b or a decimal such as 0.25");
-                        if (w.IsZero) throw Error(tokens[3], $"weight of edge {u} {v} is zero: leave the edge out instead");
-                    }
-                    var key = string.CompareOrdinal(u, v) < 0 ? (u, v) : (v, u);
-                    if (edgeLines.TryGetValue(key, out var firstLine))
-                        throw Error(tokens[1], $"edge {u} {v} appears twice (lines {firstLine} and {lineNo})");
-                    edgeLines[key] = lineNo;
-                    Declare(u); Declare(v);
-                    edges.Add((u, v, w));
-                    break;
-                }
-                case "at":
-                {
-                    if (tokens.Count != 4) throw Error(tokens.Count > 4 ? tokens[4] : kw, "'at' takes a node name and two coordinates");
-                    var n = Name(tokens[1]);
-                    var coords = new decimal[2];
-                    for (int k = 0; k < 2; k++)
-                    {
-                        var t = tokens[2 + k];
-                        if (!CoordinatePattern().IsMatch(t.Text) || !decimal.TryParse(t.Text, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture, out coords[k]))
-                            throw Error(t, $"bad coordinate '{t.Text}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
-                    }
-                    references.Add((n, lineNo, tokens[1].Column, "at"));
-                    positions[n] = new PositionHint(coords[0], coords[1]);
-                    break;
-                }
-                case "plane":
-                    throw Error(kw, "'plane' is reserved for a later version of the format");
-                default:
-                    throw Error(kw, $"unknown keyword '{kw.Text}': expected input, output, node, edge or at");
-            }
-        }
-        foreach (var (name, line, column, keyword) in references)
-            if (!known.Contains(name))
-                throw new GraphFormatException(fileName, line, column, $"unknown node {name} in '{keyword}': declare it with an 'edge' or 'node' line");
-        return new OpenGraph(nodes, edges, inputs.Keys, outputs.Keys, positions);
+        var state = new ParseState(text, fileName);
+        state.Run();
+        return state.Build();
     }
 
-    private static List<Token> Tokenize(string line)
+    /// <summary>The mutable state of one parse; names are interned to ids in order of first sight.</summary>
+    private sealed class ParseState
     {
-        var tokens = new List<Token>();
-        int i = 0;
-        while (i < line.Length)
+        private readonly Dictionary<string, int> ids;
+        private readonly Dictionary<string, int>.AlternateLookup<ReadOnlySpan<char>> idLookup;
+        private readonly List<string> names = new();
+        private bool[] declared = new bool[16];
+        private readonly List<int> edgeU = new(), edgeV = new();
+        private readonly List<Rational> weights = new();
+        private readonly Dictionary<long, int> edgeLines = new(PackedEdgeKeyComparer.Instance);
+        private readonly Dictionary<int, int> inputs = new(), outputs = new();
+        private readonly List<(int Id, int Line, int Column, string Keyword)> references = new();
+        private readonly Dictionary<int, PositionHint> positions = new();
+        private readonly Dictionary<string, Rational> weightCache;
+        private readonly Dictionary<string, Rational>.AlternateLookup<ReadOnlySpan<char>> weightLookup;
+
+        public ParseState(string text, string fileName)
         {
-            char c = line[i];
-            if (c == '#') break;
-            if (c is ' ' or '\t' or '\r') { i++; continue; }
-            int start = i;
-            while (i < line.Length && line[i] is not (' ' or '\t' or '\r' or '#')) i++;
-            tokens.Add(new Token(line[start..i], start + 1));
+            this.text = text;
+            this.fileName = fileName;
+            ids = new Dictionary<string, int>(StringComparer.Ordinal);
+            idLookup = ids.GetAlternateLookup<ReadOnlySpan<char>>();
+            weightCache = new Dictionary<string, Rational>(StringComparer.Ordinal);
+            weightLookup = weightCache.GetAlternateLookup<ReadOnlySpan<char>>();
         }
-        return tokens;
+
+        private readonly string text, fileName;
+
+        // Tokens of the current line: start (in the line) and length.
+        private int[] starts = new int[8], lengths = new int[8];
+        private int count, lineNo;
+        private ReadOnlyMemory<char> line;
+
+        private ReadOnlySpan<char> Tok(int k) => line.Span.Slice(starts[k], lengths[k]);
+        private string TokText(int k) => Tok(k).ToString();
+        private GraphFormatException Error(int k, string problem) => new(fileName, lineNo, starts[k] + 1, problem);
+
+        public void Run()
+        {
+            int pos = 0;
+            lineNo = 0;
+            while (true)
+            {
+                int nl = text.IndexOf('\n', pos);
+                int end = nl < 0 ? text.Length : nl;
+                lineNo++;
+                line = text.AsMemory(pos, end - pos);
+                Tokenize();
+                if (count > 0) Line();
+                if (nl < 0) break;
+                pos = nl + 1;
+            }
+        }
+
+        private void Tokenize()
+        {
+            var s = line.Span;
+            count = 0;
+            int i = 0;
+            while (i < s.Length)
+            {
+                char c = s[i];
+                if (c == '#') break;
+                if (c is ' ' or '\t' or '\r') { i++; continue; }
+                int start = i;
+                while (i < s.Length && s[i] is not (' ' or '\t' or '\r' or '#')) i++;
+                if (count == starts.Length)
+                {
+                    Array.Resize(ref starts, count * 2);
+                    Array.Resize(ref lengths, count * 2);
+                }
+                starts[count] = start;
+                lengths[count] = i - start;
+                count++;
+            }
+        }
+
+        private static bool IsNameSpan(ReadOnlySpan<char> s)
+        {
+            // Same language as NamePattern: [A-Za-z_][A-Za-z0-9_.:\-]*
+            if (s.Length == 0) return false;
+            char c0 = s[0];
+            if (!(char.IsAsciiLetter(c0) || c0 == '_')) return false;
+            for (int i = 1; i < s.Length; i++)
+            {
+                char c = s[i];
+                if (!(char.IsAsciiLetterOrDigit(c) || c is '_' or '.' or ':' or '-')) return false;
+            }
+            return true;
+        }
+
+        /// <summary>The id of token k as a node name; checks the name the first time it is seen.</summary>
+        private int Name(int k)
+        {
+            var span = Tok(k);
+            if (idLookup.TryGetValue(span, out var id)) return id;
+            if (!IsNameSpan(span))
+                throw Error(k, $"bad node name '{span}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
+            var name = span.ToString();
+            id = names.Count;
+            ids.Add(name, id);
+            names.Add(name);
+            if (id == declared.Length) Array.Resize(ref declared, id * 2);
+            return id;
+        }
+
+        private bool Is(int k, string keyword) => Tok(k).SequenceEqual(keyword);
+
+        private void Line()
+        {
+            if (Is(0, "input")) Terminals(inputs, "input");
+            else if (Is(0, "output")) Terminals(outputs, "output");
+            else if (Is(0, "node"))
+            {
+                if (count < 2) throw Error(0, "'node' needs at least one node name");
+                for (int k = 1; k < count; k++) declared[Name(k)] = true;
+            }
+            else if (Is(0, "edge")) Edge();
+            else if (Is(0, "at")) At();
+            else if (Is(0, "plane")) throw Error(0, "'plane' is reserved for a later version of the format");
+            else throw Error(0, $"unknown keyword '{TokText(0)}': expected input, output, node, edge or at");
+        }
+
+        private void Terminals(Dictionary<int, int> target, string keyword)
+        {
+            for (int k = 1; k < count; k++)
+            {
+                int n = Name(k);
+                if (target.TryGetValue(n, out var first))
+                    throw Error(k, $"node {names[n]} is listed twice as {keyword} (lines {first} and {lineNo})");
+                target[n] = lineNo;
+                references.Add((n, lineNo, starts[k] + 1, keyword));
+            }
+        }
+
+        private void Edge()
+        {
+            if (count is < 3 or > 4)
+                throw Error(count > 4 ? 4 : 0, "'edge' takes two node names and an optional weight");
+            int u = Name(1), v = Name(2);
+            if (u == v) throw Error(2, $"self-loop on node {names[u]}: a graph state has no edge from a node to itself");
+            var w = Rational.One;
+            if (count == 4) w = Weight(u, v);
+            long key = u < v ? ((long)u << 32) | (uint)v : ((long)v << 32) | (uint)u;
+            if (edgeLines.TryGetValue(key, out var firstLine))
+                throw Error(1, $"edge {names[u]} {names[v]} appears twice (lines {firstLine} and {lineNo})");
+            edgeLines[key] = lineNo;
+            declared[u] = true; declared[v] = true;
+            edgeU.Add(u); edgeV.Add(v); weights.Add(w);
+        }
+
+        private Rational Weight(int u, int v)
+        {
+            var span = Tok(3);
+            if (weightLookup.TryGetValue(span, out var cached)) return cached;
+            var s = span.ToString();
+            if (!Rational.TryParse(s, out var w))
+                throw Error(3, $"bad weight '{s}': write an integer, a/b or a decimal such as 0.25");
+            if (w.IsZero) throw Error(3, $"weight of edge {names[u]} {names[v]} is zero: leave the edge out instead");
+            if (weightCache.Count < WeightCacheLimit) weightCache[s] = w;
+            return w;
+        }
+
+        private void At()
+        {
+            if (count != 4) throw Error(count > 4 ? 4 : 0, "'at' takes a node name and two coordinates");
+            int n = Name(1);
+            Span<decimal> coords = stackalloc decimal[2];
+            for (int k = 0; k < 2; k++)
+            {
+                var t = Tok(2 + k);
+                if (!CoordinatePattern().IsMatch(t) || !decimal.TryParse(t, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture, out coords[k]))
+                    throw Error(2 + k, $"bad coordinate '{t}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
+            }
+            references.Add((n, lineNo, starts[1] + 1, "at"));
+            positions[n] = new PositionHint(coords[0], coords[1]);
+        }
+
+        public OpenGraph Build()
+        {
+            foreach (var (id, line, column, keyword) in references)
+                if (!declared[id])
+                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{keyword}': declare it with an 'edge' or 'node' line");
+            // Declared names in ordinal order; rank maps a name id to its node index.
+            var order = new List<int>(names.Count);
+            for (int id = 0; id < names.Count; id++) if (declared[id]) order.Add(id);
+            var sortedIds = order.ToArray();
+            var sortedNames = new string[sortedIds.Length];
+            for (int i = 0; i < sortedIds.Length; i++) sortedNames[i] = names[sortedIds[i]];
+            Array.Sort(sortedNames, sortedIds, StringComparer.Ordinal);
+            var rank = new int[names.Count];
+            for (int i = 0; i < sortedIds.Length; i++) rank[sortedIds[i]] = i;
+
+            var us = new int[edgeU.Count];
+            var vs = new int[edgeU.Count];
+            for (int e = 0; e < us.Length; e++) { us[e] = rank[edgeU[e]]; vs[e] = rank[edgeV[e]]; }
+            var inputIndices = new List<int>(inputs.Count);
+            foreach (var id in inputs.Keys) inputIndices.Add(rank[id]);
+            var outputIndices = new List<int>(outputs.Count);
+            foreach (var id in outputs.Keys) outputIndices.Add(rank[id]);
+            var hints = new Dictionary<int, PositionHint>(positions.Count);
+            foreach (var (id, hint) in positions) hints[rank[id]] = hint;
+            return OpenGraph.FromIndices(sortedNames, us, vs, weights.ToArray(), inputIndices, outputIndices, hints);
+        }
     }
 }

@@ -33,27 +33,89 @@ public sealed class OpenGraph
     public OpenGraph(IEnumerable<string> names, IEnumerable<(string U, string V, Rational Weight)> edges,
         IEnumerable<string> inputs, IEnumerable<string> outputs, IReadOnlyDictionary<string, PositionHint>? positions = null)
     {
-        var sorted = names.Distinct().ToArray();
-        Array.Sort(sorted, StringComparer.Ordinal);
+        var sorted = SortedDistinct(names);
         Names = sorted;
-        index = new Dictionary<string, int>(sorted.Length, StringComparer.Ordinal);
-        for (int i = 0; i < sorted.Length; i++) index[sorted[i]] = i;
-        var list = new List<WeightedEdge>();
-        var seen = new HashSet<(int, int)>();
+        index = BuildIndex(sorted);
+        var keys = new List<long>();
+        var weights = new List<Rational>();
+        var seen = new HashSet<long>(PackedEdgeKeyComparer.Instance);
         foreach (var (u, v, w) in edges)
         {
             int a = IndexOf(u), b = IndexOf(v);
             if (a == b) throw new ArgumentException($"self-loop on node {u}");
             if (w.IsZero) throw new ArgumentException($"edge {u} {v} has weight zero");
-            var key = a < b ? (a, b) : (b, a);
+            long key = a < b ? Pack(a, b) : Pack(b, a);
             if (!seen.Add(key)) throw new ArgumentException($"edge {u} {v} appears twice");
-            list.Add(new WeightedEdge(key.Item1, key.Item2, w));
+            keys.Add(key);
+            weights.Add(w);
         }
-        list.Sort((x, y) => x.U != y.U ? x.U.CompareTo(y.U) : x.V.CompareTo(y.V));
-        Edges = list;
-        Inputs = inputs.Select(IndexOf).ToHashSet();
-        Outputs = outputs.Select(IndexOf).ToHashSet();
-        Positions = (positions ?? new Dictionary<string, PositionHint>()).ToDictionary(kv => IndexOf(kv.Key), kv => kv.Value);
+        Edges = SortedEdges(keys.ToArray(), weights.ToArray());
+        var inputSet = new HashSet<int>();
+        foreach (var name in inputs) inputSet.Add(IndexOf(name));
+        Inputs = inputSet;
+        var outputSet = new HashSet<int>();
+        foreach (var name in outputs) outputSet.Add(IndexOf(name));
+        Outputs = outputSet;
+        var hints = new Dictionary<int, PositionHint>();
+        if (positions is not null)
+            foreach (var (name, hint) in positions) hints.Add(IndexOf(name), hint);
+        Positions = hints;
+    }
+
+    private OpenGraph(string[] sortedNames, List<WeightedEdge> edges, HashSet<int> inputs, HashSet<int> outputs,
+        Dictionary<int, PositionHint> positions)
+    {
+        Names = sortedNames;
+        index = BuildIndex(sortedNames);
+        Edges = edges;
+        Inputs = inputs;
+        Outputs = outputs;
+        Positions = positions;
+    }
+
+    /// <summary>
+    /// Builds a graph from already checked parts: distinct names in ordinal order, and edges, inputs,
+    /// outputs and positions by index into them. Edges must have distinct endpoints, nonzero weights and
+    /// no repeats (the caller has checked); they are sorted here, and the graph takes the arrays over.
+    /// </summary>
+    internal static OpenGraph FromIndices(string[] sortedNames, int[] us, int[] vs, Rational[] weights,
+        IEnumerable<int> inputs, IEnumerable<int> outputs, Dictionary<int, PositionHint> positions)
+    {
+        var keys = new long[us.Length];
+        for (int e = 0; e < keys.Length; e++)
+            keys[e] = us[e] < vs[e] ? Pack(us[e], vs[e]) : Pack(vs[e], us[e]);
+        return new OpenGraph(sortedNames, SortedEdges(keys, weights),
+            new HashSet<int>(inputs), new HashSet<int>(outputs), positions);
+    }
+
+    private static long Pack(int u, int v) => ((long)u << 32) | (uint)v;
+
+    /// <summary>Edges from packed (U, V) keys, all distinct, sorted by (U, V); sorts both arrays in place.</summary>
+    private static List<WeightedEdge> SortedEdges(long[] keys, Rational[] weights)
+    {
+        Array.Sort(keys, weights);
+        var list = new List<WeightedEdge>(keys.Length);
+        for (int e = 0; e < keys.Length; e++)
+            list.Add(new WeightedEdge((int)(keys[e] >> 32), (int)(uint)keys[e], weights[e]));
+        return list;
+    }
+
+    private static string[] SortedDistinct(IEnumerable<string> names)
+    {
+        var all = names.ToArray();
+        Array.Sort(all, StringComparer.Ordinal);
+        int kept = 0;
+        for (int i = 0; i < all.Length; i++)
+            if (kept == 0 || !string.Equals(all[i], all[kept - 1], StringComparison.Ordinal)) all[kept++] = all[i];
+        Array.Resize(ref all, kept);
+        return all;
+    }
+
+    private static Dictionary<string, int> BuildIndex(string[] sorted)
+    {
+        var map = new Dictionary<string, int>(sorted.Length, StringComparer.Ordinal);
+        for (int i = 0; i < sorted.Length; i++) map.Add(sorted[i], i);
+        return map;
     }
 
     /// <summary>The index of a node name; throws <see cref="ArgumentException"/> for an unknown name.</summary>
@@ -76,5 +138,20 @@ public sealed class OpenGraph
         var touched = new bool[NodeCount];
         foreach (var e in Edges) { touched[e.U] = true; touched[e.V] = true; }
         return Enumerable.Range(0, NodeCount).Where(v => !touched[v]).ToArray();
+    }
+}
+
+/// <summary>
+/// Equality of packed (U, V) edge keys with a mixed hash: the default <see cref="long"/> hash is U xor V,
+/// which collides heavily on lattices.
+/// </summary>
+internal sealed class PackedEdgeKeyComparer : IEqualityComparer<long>
+{
+    public static readonly PackedEdgeKeyComparer Instance = new();
+    public bool Equals(long x, long y) => x == y;
+    public int GetHashCode(long key)
+    {
+        ulong h = (ulong)key * 0x9E3779B97F4A7C15UL;
+        return (int)(h >> 32) ^ (int)h;
     }
 }
