@@ -18,12 +18,15 @@ public sealed class OpenGraph
     public IReadOnlyList<string> Names { get; }
     /// <summary>Edges with U &lt; V, sorted by (U, V).</summary>
     public IReadOnlyList<WeightedEdge> Edges { get; }
+    /// <summary>The inputs I (not prepared in the plus state; never correctors), by node index.</summary>
     public IReadOnlySet<int> Inputs { get; }
+    /// <summary>The outputs O (never measured), by node index.</summary>
     public IReadOnlySet<int> Outputs { get; }
     /// <summary>Drawing hints by node index (ignored by the solver).</summary>
     public IReadOnlyDictionary<int, PositionHint> Positions { get; }
     private readonly Dictionary<string, int> index;
 
+    /// <summary>The number of nodes |V|.</summary>
     public int NodeCount => Names.Count;
 
     /// <summary>
@@ -122,6 +125,7 @@ public sealed class OpenGraph
     public int IndexOf(string name)
         => index.TryGetValue(name, out var i) ? i : throw new ArgumentException($"unknown node '{name}'");
 
+    /// <summary>True when the graph has a node of this name.</summary>
     public bool Contains(string name) => index.ContainsKey(name);
 
     /// <summary>Inputs as sorted indices.</summary>
