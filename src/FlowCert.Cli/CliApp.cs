@@ -61,10 +61,6 @@ public static class CliApp
     }
 
     /// <summary>Parses --flow.</summary>
-    public static FlowKind ParseKind(string text) => text switch
-    {
-        "general" => FlowKind.General,
-        "causal" => FlowKind.Causal,
-        _ => throw new UserInputException($"'{text}' is not a kind of flow: write general or causal."),
-    };
+    public static FlowKind ParseKind(string text)
+        => FlowKinds.TryParse(text, out var kind) ? kind : throw new UserInputException($"'{text}' is not a kind of flow: write general or causal.");
 }

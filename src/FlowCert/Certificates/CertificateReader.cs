@@ -71,12 +71,7 @@ public static class CertificateReader
         };
         OnlyKeys(root, CommonKeys.Concat(verdictKeys), "the certificate");
         var kindText = Str(Required(root, "flow"), "flow");
-        var kind = kindText switch
-        {
-            "general" => FlowKind.General,
-            "causal" => FlowKind.Causal,
-            _ => throw Bad(root["flow"], $"unknown flow '{kindText}'"),
-        };
+        if (!FlowKinds.TryParse(kindText, out var kind)) throw Bad(root["flow"], $"unknown flow '{kindText}'");
         var fieldName = Str(Required(root, "field"), "field");
         FieldSpec field;
         try { field = fieldName == "Q" ? FieldSpec.Rationals : fieldName.StartsWith('F') ? FieldSpec.Parse(fieldName) : throw new FieldSpecException(""); }

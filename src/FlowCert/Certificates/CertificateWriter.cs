@@ -21,7 +21,7 @@ public static class CertificateWriter
     public const string ProducerVersion = "0.1.0";
 
     /// <summary>The name of a flow kind in certificates and on the command line.</summary>
-    public static string KindName(FlowKind kind) => kind == FlowKind.Causal ? "causal" : "general";
+    public static string KindName(FlowKind kind) => FlowKinds.Name(kind);
 
     /// <summary>The certificate text.</summary>
     public static string Write(FlowResult r)

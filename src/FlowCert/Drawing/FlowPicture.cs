@@ -49,5 +49,5 @@ public sealed class FlowPicture
         _ => $"{graphName}: no {Kind(r)} flow over {r.Field.Name}",
     };
 
-    private static string Kind(FlowResult r) => r.Kind == FlowKind.Causal ? "causal" : "generalized";
+    private static string Kind(FlowResult r) => FlowKinds.Adjective(r.Kind);
 }

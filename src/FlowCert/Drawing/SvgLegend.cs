@@ -48,7 +48,7 @@ internal static class SvgLegend
         return lines;
     }
 
-    private static string KindText(FlowKind k) => k == FlowKind.Causal ? "causal" : "generalized";
+    private static string KindText(FlowKind k) => FlowKinds.Adjective(k);
 
     public static double Width(List<Line> lines)
         => 24 + GlyphWidth + lines.Select(l => SvgText.Width(l.Text, FontSize)).DefaultIfEmpty(0).Max();

@@ -12,6 +12,23 @@ public enum FlowKind
     Causal,
 }
 
+/// <summary>The one place where a kind of flow is named: in certificates and on the command line, and in prose.</summary>
+public static class FlowKinds
+{
+    /// <summary>The name in certificates and on the command line: <c>general</c> or <c>causal</c>.</summary>
+    public static string Name(FlowKind kind) => kind == FlowKind.Causal ? "causal" : "general";
+
+    /// <summary>The adjective in prose and pictures: <c>generalized</c> or <c>causal</c>.</summary>
+    public static string Adjective(FlowKind kind) => kind == FlowKind.Causal ? "causal" : "generalized";
+
+    /// <summary>Reads a name written by <see cref="Name"/>; false for anything else.</summary>
+    public static bool TryParse(string text, out FlowKind kind)
+    {
+        kind = text == "causal" ? FlowKind.Causal : FlowKind.General;
+        return text is "general" or "causal";
+    }
+}
+
 /// <summary>A sparse vector over nodes with canonical field-element text, entries sorted by node index.</summary>
 public sealed record NodeVector(IReadOnlyList<(int Node, string Value)> Entries);
 
