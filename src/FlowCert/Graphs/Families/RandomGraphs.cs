@@ -9,7 +9,7 @@ namespace FlowCert.Graphs.Families;
 /// </summary>
 internal static class RandomGraphs
 {
-    internal static string Name(int v) => $"v{v}";
+    internal static string Name(int v) => NumberedNames.Name(v);
 
     /// <summary>
     /// The binomial random graph G(n, q), with independent edges (common practice): every pair {u, v},

@@ -125,7 +125,7 @@ public static partial class MatrixMarketReader
     public static OpenGraph Parse(string text, string fileName) => ToGraph(ParseMatrix(text, fileName), fileName);
 
     /// <summary>Node name of row and column k (1-based, as in the file).</summary>
-    public static string NodeName(long k) => "v" + k.ToString(System.Globalization.CultureInfo.InvariantCulture);
+    public static string NodeName(long k) => NumberedNames.Name(k);
 
     /// <summary>Reads a parsed matrix as an adjacency matrix.</summary>
     public static OpenGraph ToGraph(MatrixMarketMatrix m, string fileName)

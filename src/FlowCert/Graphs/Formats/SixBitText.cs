@@ -100,7 +100,7 @@ public static class SixBitText
     }
 
     /// <summary>Node names of a graph read from these formats: v0 .. v(n-1), nauty's vertex numbers.</summary>
-    public static string NodeName(long vertex) => "v" + vertex.ToString(System.Globalization.CultureInfo.InvariantCulture);
+    public static string NodeName(long vertex) => NumberedNames.Name(vertex);
 
     /// <summary>The graph of a decoded line: nodes v0..v(n-1), every edge of weight 1, no inputs or outputs.</summary>
     public static OpenGraph Graph(long n, IEnumerable<(long U, long V)> edges)
