@@ -31,7 +31,7 @@ public static class CertificateReader
     private static readonly string[] NoFlowKeys = ["obstruction"];
 
     /// <summary>Reads a certificate file.</summary>
-    public static FlowResult ReadFile(string path) => Parse(File.ReadAllText(path), path);
+    public static FlowResult ReadFile(string path) => Parse(InputText.ReadAll(path), path);
 
     /// <summary>Parses certificate text; throws <see cref="CertificateFormatException"/> naming file, line and column.</summary>
     public static FlowResult Parse(string text, string fileName)
@@ -39,6 +39,9 @@ public static class CertificateReader
         try { return ParseChecked(text, fileName); }
         catch (GraphFormatException e) { throw new CertificateFormatException(e.File, e.Problem, e.Line, e.Column); }
     }
+
+    // A JSON integer as a long, or null when it does not fit in 64 bits (Json.NET then holds a BigInteger).
+    private static long? SmallInteger(JToken t) => ((JValue)t).Value is long l ? l : null;
 
     private static FlowResult ParseChecked(string text, string fileName)
     {
@@ -56,26 +59,28 @@ public static class CertificateReader
         {
             var set = allowed.ToHashSet();
             foreach (var p in o.Properties())
-                if (!set.Contains(p.Name)) throw Bad(p, $"unknown key '{p.Name}' in {where}");
+                if (!set.Contains(p.Name)) throw Bad(p, $"unknown key '{Excerpt.Of(p.Name)}' in {where}");
         }
 
-        if (Str(Required(root, "format"), "format") != CertificateWriter.Format) throw Bad(root["format"], $"unknown format '{root["format"]}'");
+        if (Str(Required(root, "format"), "format") != CertificateWriter.Format) throw Bad(root["format"], $"unknown format '{Excerpt.Of((string)root["format"]!)}'");
         var version = Required(root, "version");
-        if (version.Type != JTokenType.Integer || (long)version != CertificateWriter.Version) throw Bad(version, $"unknown version '{version}'");
+        if (version.Type != JTokenType.Integer) throw Bad(version, $"version must be a whole number, not {Excerpt.Of(version.ToString(Newtonsoft.Json.Formatting.None))}");
+        if (SmallInteger(version) is not { } v || v != CertificateWriter.Version)
+            throw Bad(version, $"unknown version {(SmallInteger(version) is { } n ? n.ToString(System.Globalization.CultureInfo.InvariantCulture) : "(a number too large for 64 bits)")}: this reader knows version {CertificateWriter.Version}");
         var verdict = Str(Required(root, "verdict"), "verdict");
         var verdictKeys = verdict switch
         {
             "flow" => FlowKeys,
             "noflow" => NoFlowKeys,
-            _ => throw Bad(root["verdict"], $"unknown verdict '{verdict}'"),
+            _ => throw Bad(root["verdict"], $"unknown verdict '{Excerpt.Of(verdict)}'"),
         };
         OnlyKeys(root, CommonKeys.Concat(verdictKeys), "the certificate");
         var kindText = Str(Required(root, "flow"), "flow");
-        if (!FlowKinds.TryParse(kindText, out var kind)) throw Bad(root["flow"], $"unknown flow '{kindText}'");
+        if (!FlowKinds.TryParse(kindText, out var kind)) throw Bad(root["flow"], $"unknown flow '{Excerpt.Of(kindText)}'");
         var fieldName = Str(Required(root, "field"), "field");
         FieldSpec field;
         try { field = fieldName == "Q" ? FieldSpec.Rationals : fieldName.StartsWith('F') ? FieldSpec.Parse(fieldName) : throw new FieldSpecException(""); }
-        catch (FieldSpecException) { throw Bad(root["field"], $"unknown field '{fieldName}'"); }
+        catch (FieldSpecException) { throw Bad(root["field"], $"unknown field '{Excerpt.Of(fieldName)}'"); }
         if (field.Name != fieldName) throw Bad(root["field"], $"field '{fieldName}' is not written canonically ('{field.Name}')");
         if (Required(root, "producer") is not JObject producer) throw Bad(root["producer"], "producer must be an object");
         OnlyKeys(producer, ["name", "version"], "producer");
@@ -88,9 +93,9 @@ public static class CertificateReader
         int Node(JToken t)
         {
             var name = Str(t, "a node");
-            return graph.Contains(name) ? graph.IndexOf(name) : throw Bad(t, $"unknown node '{name}'");
+            return graph.Contains(name) ? graph.IndexOf(name) : throw Bad(t, $"unknown node '{Excerpt.Of(name)}'");
         }
-        int Key(JProperty p) => graph.Contains(p.Name) ? graph.IndexOf(p.Name) : throw Bad(p, $"unknown node '{p.Name}'");
+        int Key(JProperty p) => graph.Contains(p.Name) ? graph.IndexOf(p.Name) : throw Bad(p, $"unknown node '{Excerpt.Of(p.Name)}'");
         int[] Nodes(JToken? t, string what) => t is JArray a ? a.Select(Node).ToArray() : throw Bad(t ?? root, $"{what} must be a list of node names");
         NodeVector Vector(JToken t, string what)
         {
@@ -106,7 +111,9 @@ public static class CertificateReader
             foreach (var round in Required(root, "rounds") as JArray ?? throw Bad(root["rounds"], "rounds must be a list"))
                 rounds.Add(Nodes(round, "a round"));
             var depth = Required(root, "depth");
-            if (depth.Type != JTokenType.Integer || (long)depth != rounds.Count) throw Bad(depth, $"depth {depth} is not the number of rounds ({rounds.Count})");
+            if (depth.Type != JTokenType.Integer) throw Bad(depth, $"depth must be a whole number, not {Excerpt.Of(depth.ToString(Newtonsoft.Json.Formatting.None))}");
+            if (SmallInteger(depth) is not { } d) throw Bad(depth, "depth is a number too large for 64 bits");
+            if (d != rounds.Count) throw Bad(depth, $"depth {d} is not the number of rounds ({rounds.Count})");
             foreach (var p in (Required(root, "corrections") as JObject ?? throw Bad(root["corrections"], "corrections must be an object")).Properties())
                 corrections[Key(p)] = Vector(p.Value, $"the correction of {p.Name}");
         }

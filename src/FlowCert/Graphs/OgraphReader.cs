@@ -20,16 +20,26 @@ public static partial class OgraphReader
     /// <summary>True when the text is a valid node name.</summary>
     public static bool IsValidName(string name) => NamePattern().IsMatch(name);
 
-    /// <summary>Reads a file; errors name the file as given.</summary>
-    public static OpenGraph ReadFile(string path) => Parse(File.ReadAllText(path), path);
+    /// <summary>Reads a file as a stream (the whole text is never held at once); errors name the file as given.</summary>
+    public static OpenGraph ReadFile(string path)
+    {
+        using var reader = new StreamReader(path, detectEncodingFromByteOrderMarks: true);
+        return Read(reader, path);
+    }
+
+    /// <summary>The longest line read, in characters; a longer one is an input error, not an exhausted memory.</summary>
+    public const int MaxLineLength = 1 << 24;
 
     /// <summary>Cap on distinct weight texts remembered with their parsed value.</summary>
     private const int WeightCacheLimit = 4096;
 
     /// <summary>Parses <c>.ograph</c> text. Throws <see cref="GraphFormatException"/> on the first error.</summary>
-    public static OpenGraph Parse(string text, string fileName)
+    public static OpenGraph Parse(string text, string fileName) => Read(new StringReader(text), fileName);
+
+    /// <summary>Parses <c>.ograph</c> text from a reader, a line at a time. Throws <see cref="GraphFormatException"/> on the first error.</summary>
+    public static OpenGraph Read(TextReader reader, string fileName)
     {
-        var state = new ParseState(text, fileName);
+        var state = new ParseState(reader, fileName);
         state.Run();
         return state.Build();
     }
@@ -50,9 +60,9 @@ public static partial class OgraphReader
         private readonly Dictionary<string, Rational> weightCache;
         private readonly Dictionary<string, Rational>.AlternateLookup<ReadOnlySpan<char>> weightLookup;
 
-        public ParseState(string text, string fileName)
+        public ParseState(TextReader reader, string fileName)
         {
-            this.text = text;
+            this.reader = reader;
             this.fileName = fileName;
             ids = new Dictionary<string, int>(StringComparer.Ordinal);
             idLookup = ids.GetAlternateLookup<ReadOnlySpan<char>>();
@@ -60,7 +70,12 @@ public static partial class OgraphReader
             weightLookup = weightCache.GetAlternateLookup<ReadOnlySpan<char>>();
         }
 
-        private readonly string text, fileName;
+        private readonly TextReader reader;
+        private readonly string fileName;
+        // The reader's text arrives in chunks; the current line is assembled in lineBuffer.
+        private readonly char[] chunk = new char[1 << 16];
+        private int chunkPos, chunkLen;
+        private char[] lineBuffer = new char[256];
 
         // Tokens of the current line: start (in the line) and length.
         private int[] starts = new int[8], lengths = new int[8];
@@ -73,18 +88,39 @@ public static partial class OgraphReader
 
         public void Run()
         {
-            int pos = 0;
             lineNo = 0;
-            while (true)
+            bool more = true;
+            while (more)
             {
-                int nl = text.IndexOf('\n', pos);
-                int end = nl < 0 ? text.Length : nl;
                 lineNo++;
-                line = text.AsMemory(pos, end - pos);
+                more = NextLine();
                 Tokenize();
                 if (count > 0) Line();
-                if (nl < 0) break;
-                pos = nl + 1;
+            }
+        }
+
+        /// <summary>Reads up to the next LF (not included) into <see cref="line"/>; false when the text ended.</summary>
+        private bool NextLine()
+        {
+            int length = 0;
+            while (true)
+            {
+                if (chunkPos == chunkLen)
+                {
+                    chunkLen = reader.Read(chunk, 0, chunk.Length);
+                    chunkPos = 0;
+                    if (chunkLen == 0) { line = lineBuffer.AsMemory(0, length); return false; }
+                }
+                int nl = Array.IndexOf(chunk, '\n', chunkPos, chunkLen - chunkPos);
+                int end = nl < 0 ? chunkLen : nl;
+                int take = end - chunkPos;
+                if (length + take > MaxLineLength)
+                    throw new GraphFormatException(fileName, lineNo, 1, $"line {lineNo} is longer than {MaxLineLength} characters");
+                if (length + take > lineBuffer.Length) Array.Resize(ref lineBuffer, Math.Max(length + take, lineBuffer.Length * 2));
+                Array.Copy(chunk, chunkPos, lineBuffer, length, take);
+                length += take;
+                chunkPos = end;
+                if (nl >= 0) { chunkPos++; line = lineBuffer.AsMemory(0, length); return true; }
             }
         }
 
@@ -97,6 +133,9 @@ public static partial class OgraphReader
             {
                 char c = s[i];
                 if (c == '#') break;
+                if (c == '\r' && i + 1 < s.Length)
+                    throw new GraphFormatException(fileName, lineNo, i + 1,
+                        "carriage return inside a line: line ends are LF or CR LF (convert a file with CR-only line ends first)");
                 if (c is ' ' or '\t' or '\r') { i++; continue; }
                 int start = i;
                 while (i < s.Length && s[i] is not (' ' or '\t' or '\r' or '#')) i++;
@@ -131,7 +170,7 @@ public static partial class OgraphReader
             var span = Tok(k);
             if (idLookup.TryGetValue(span, out var id)) return id;
             if (!IsNameSpan(span))
-                throw Error(k, $"bad node name '{span}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
+                throw Error(k, $"bad node name '{Formats.Excerpt.Of(span.ToString())}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
             var name = span.ToString();
             id = names.Count;
             ids.Add(name, id);
@@ -149,12 +188,16 @@ public static partial class OgraphReader
             else if (Is(0, "node"))
             {
                 if (count < 2) throw Error(0, "'node' needs at least one node name");
-                for (int k = 1; k < count; k++) declared[Name(k)] = true;
+                for (int k = 1; k < count; k++)
+                {
+                    int id = Name(k); // before indexing: Name may grow the declared array
+                    declared[id] = true;
+                }
             }
             else if (Is(0, "edge")) Edge();
             else if (Is(0, "at")) At();
             else if (Is(0, "plane")) throw Error(0, "'plane' is reserved for a later version of the format");
-            else throw Error(0, $"unknown keyword '{TokText(0)}': expected input, output, node, edge or at");
+            else throw Error(0, $"unknown keyword '{Formats.Excerpt.Of(TokText(0))}': expected input, output, node, edge or at");
         }
 
         private void Terminals(Dictionary<int, int> target, string keyword)
@@ -191,7 +234,7 @@ public static partial class OgraphReader
             if (weightLookup.TryGetValue(span, out var cached)) return cached;
             var s = span.ToString();
             if (!Rational.TryParse(s, out var w))
-                throw Error(3, $"bad weight '{s}': write an integer, a/b or a decimal such as 0.25");
+                throw Error(3, $"bad weight '{Formats.Excerpt.Of(s)}': write an integer, a/b or a decimal such as 0.25");
             if (w.IsZero) throw Error(3, $"weight of edge {names[u]} {names[v]} is zero: leave the edge out instead");
             if (weightCache.Count < WeightCacheLimit) weightCache[s] = w;
             return w;
@@ -206,7 +249,7 @@ public static partial class OgraphReader
             {
                 var t = Tok(2 + k);
                 if (!CoordinatePattern().IsMatch(t) || !decimal.TryParse(t, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture, out coords[k]))
-                    throw Error(2 + k, $"bad coordinate '{t}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
+                    throw Error(2 + k, $"bad coordinate '{Formats.Excerpt.Of(t.ToString())}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
             }
             references.Add((n, lineNo, starts[1] + 1, "at"));
             positions[n] = new PositionHint(coords[0], coords[1]);

@@ -53,15 +53,18 @@ public static class GraphFiles
         var format = FormatOf(path);
         if (format == GraphFileFormat.Dot)
             throw new GraphFileException($"{path}: DOT files are written for Graphviz, not read: use .ograph, .g6, .s6, .mtx or .json");
-        return Parse(File.ReadAllText(path), path, format, inputs, outputs);
+        if (format == GraphFileFormat.Ograph)
+        {
+            RefuseSeparateTerminals(path, format, inputs, outputs);
+            return OgraphReader.ReadFile(path);
+        }
+        return Parse(InputText.ReadAll(path), path, format, inputs, outputs);
     }
 
     /// <summary>Parses text of a given format; see <see cref="Read"/>.</summary>
     public static OpenGraph Parse(string text, string fileName, GraphFileFormat format, string? inputs = null, string? outputs = null)
     {
-        if (HasTerminals(format) && (inputs is not null || outputs is not null))
-            throw new GraphFileException(
-                $"{fileName} names its own inputs and outputs: separate lists are for .g6, .s6 and .mtx files only");
+        RefuseSeparateTerminals(fileName, format, inputs, outputs);
         var graph = format switch
         {
             GraphFileFormat.Ograph => OgraphReader.Parse(text, fileName),
@@ -72,6 +75,13 @@ public static class GraphFiles
             _ => throw new GraphFileException($"{fileName}: {format} files are not read"),
         };
         return HasTerminals(format) ? graph : WithTerminals(graph, fileName, ParseNames(inputs), ParseNames(outputs));
+    }
+
+    private static void RefuseSeparateTerminals(string fileName, GraphFileFormat format, string? inputs, string? outputs)
+    {
+        if (HasTerminals(format) && (inputs is not null || outputs is not null))
+            throw new GraphFileException(
+                $"{fileName} names its own inputs and outputs: separate lists are for .g6, .s6 and .mtx files only");
     }
 
     /// <summary>Writes a graph in a format: .ograph is the canonical form followed by the graph's <c>at</c> lines.</summary>
