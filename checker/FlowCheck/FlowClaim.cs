@@ -53,7 +53,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal)
             var text = Json.String(p.Value, $"corrections.{v}.{u}");
             if (!g.Nodes.Contains(u)) throw new InvalidCertificate($"node {v}: correction on unknown node {u}");
             c[u] = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
-                $"node {v}: c_{v}({u}) = \"{text}\" is not a canonical non-zero element of {g.Field.Name}");
+                $"node {v}: c_{v}({u}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
             if (g.Inputs.Contains(u)) throw new InvalidCertificate($"node {v}: correction on input {u}");
             if (!IsLater(u, v)) throw new InvalidCertificate($"node {v} (round {round[v]}): correction on {u} ({Position(u)}), which is not later");
         }

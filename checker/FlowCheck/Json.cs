@@ -48,6 +48,9 @@ public static class Json
     public static string String(JToken? token, string what) =>
         token?.Type == JTokenType.String ? (string)token! : throw Shape(token, what, "a string");
 
+    /// <summary>At most 80 characters of a value from the input, then "...": a message never repeats a long value whole.</summary>
+    public static string Cut(string s) => s.Length <= 80 ? s : s[..80] + "...";
+
     public static List<string> Strings(JToken? token, string what) =>
         Array(token, what).Select((t, i) => String(t, $"{what}[{i}]")).ToList();
 

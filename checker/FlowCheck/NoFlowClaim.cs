@@ -52,7 +52,7 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal)
                 var text = Json.String(p.Value, $"{what}.{p.Name}");
                 if (!u.Contains(p.Name)) throw new InvalidCertificate($"{what}: entry on {p.Name}, which is not in the blocked set");
                 var y = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
-                    $"{what}: y({p.Name}) = \"{text}\" is not a canonical non-zero element of {g.Field.Name}");
+                    $"{what}: y({p.Name}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
                 covered.Add(p.Name);
                 foreach (var (w, a) in g.Adjacent[p.Name].Where(e => IsCorrector(e.Key, u)))
                     product[w] = g.Field.Add(product.GetValueOrDefault(w, Rational.Zero), g.Field.Mul(y, a));

@@ -46,6 +46,14 @@ public readonly record struct Rational
     }
 
     /// <summary>Reads a rational only if the text is exactly its canonical form; null otherwise.</summary>
-    public static Rational? ParseCanonical(string text) =>
-        ParseWeight(text) is { } r && r.ToString() == text ? r : null;
+    /// <remarks>Checked by shape and by the reduced denominator, not by printing (printing a long number is quadratic).</remarks>
+    public static Rational? ParseCanonical(string text)
+    {
+        if (!CanonicalShape.IsMatch(text) || ParseWeight(text) is not { } r) return null;
+        var slash = text.IndexOf('/');
+        if (slash < 0) return r;
+        return !r.Den.IsOne && r.Den == BigInteger.Parse(text.AsSpan(slash + 1)) ? r : null;
+    }
+
+    static readonly Regex CanonicalShape = new(@"^(0|-?[1-9][0-9]*)(/[1-9][0-9]*)?\z");
 }

@@ -128,4 +128,23 @@ public class ArithmeticTests
         Assert.False(Prime.IsPrime(BigInteger.Parse("18446744073709551557") * 3));
         Assert.True(Prime.IsPrime(BigInteger.Parse("170141183460469231731687303715884105727")));
     }
+
+    // Printing a 2,000,000-digit number to compare spellings took minutes (issue 12): the canonical test
+    // now reads the shape and the reduced denominator. Correctness: the same verdicts as the spelling rule.
+    [Fact]
+    public void ALongNumberIsJudgedWithoutPrintingIt()
+    {
+        var digits = "7" + string.Concat(Enumerable.Repeat("1234567890", 200_000));
+        Assert.Equal(BigInteger.Parse(digits), Rational.ParseCanonical(digits)!.Value.Num);
+        Assert.Null(Rational.ParseCanonical("0" + digits));
+        Assert.Null(Rational.ParseCanonical(digits + "/" + digits));
+        Assert.NotNull(Rational.ParseCanonical("-" + digits + "/3"));
+    }
+
+    [Fact]
+    public void MessagesCutLongValues()
+    {
+        Assert.Equal(new string('9', 80) + "...", Json.Cut(new string('9', 81)));
+        Assert.Equal("12", Json.Cut("12"));
+    }
 }
