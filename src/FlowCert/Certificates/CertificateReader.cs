@@ -65,8 +65,8 @@ public static class CertificateReader
         if (Str(Required(root, "format"), "format") != CertificateWriter.Format) throw Bad(root["format"], $"unknown format '{Excerpt.Of((string)root["format"]!)}'");
         var version = Required(root, "version");
         if (version.Type != JTokenType.Integer) throw Bad(version, $"version must be a whole number, not {Excerpt.Of(version.ToString(Newtonsoft.Json.Formatting.None))}");
-        if (SmallInteger(version) is not { } v || v != CertificateWriter.Version)
-            throw Bad(version, $"unknown version {(SmallInteger(version) is { } n ? n.ToString(System.Globalization.CultureInfo.InvariantCulture) : "(a number too large for 64 bits)")}: this reader knows version {CertificateWriter.Version}");
+        if (SmallInteger(version) is not { } v) throw Bad(version, "version is a number too large for 64 bits");
+        if (v != CertificateWriter.Version) throw Bad(version, $"unknown version {v}: this reader knows version {CertificateWriter.Version}");
         var verdict = Str(Required(root, "verdict"), "verdict");
         var verdictKeys = verdict switch
         {
