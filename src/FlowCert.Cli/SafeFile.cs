@@ -122,10 +122,3 @@ internal static class FileKind
     [DllImport("libSystem.Native", EntryPoint = "SystemNative_LStat", CharSet = CharSet.Ansi, SetLastError = true)]
     private static extern int LStat(string path, byte[] status);
 }
-
-/// <summary>The type of a directory entry as its S_IFMT bits (tests use it to see that a special file stays special).</summary>
-public static class FileKindProbe
-{
-    /// <summary>The S_IFMT bits of the entry at path, without following a symbolic link; null when absent.</summary>
-    public static int? Of(string path) => FileKind.Of(path);
-}

@@ -77,7 +77,7 @@ public class HostileInputTests
         var run = Flowcert.InProcess("solve", graph, "--out", device);
         Assert.True(run.ExitCode == 2, run.ToString());
         Assert.Contains("character device", run.Stderr);
-        Assert.Equal(0x2000, FlowCert.Cli.FileKindProbe.Of(device));
+        Assert.Equal(FlowCert.Cli.FileKind.CharDevice, FlowCert.Cli.FileKind.Of(device));
     }
 
     [Fact]
