@@ -62,5 +62,5 @@ public static class CliApp
 
     /// <summary>Parses --flow.</summary>
     public static FlowKind ParseKind(string text)
-        => FlowKinds.TryParse(text, out var kind) ? kind : throw new UserInputException($"'{text}' is not a kind of flow: write general or causal.");
+        => FlowKinds.TryParse(text, out var kind) ? kind : throw new UserInputException($"'{text}' is not a kind of flow: write general, causal or pauli.");
 }

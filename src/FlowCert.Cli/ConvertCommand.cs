@@ -20,19 +20,20 @@ public static class ConvertCommand
         var output = new PathArgument("OUT") { Description = "graph to write: .ograph (canonical form), .g6, .s6, .mtx, .json or .dot" };
         var inputs = InputsOption();
         var outputs = OutputsOption();
-        var cmd = new Command("convert", "Convert a graph between file formats, chosen by the file extensions") { input, output, inputs, outputs };
-        cmd.SetAction(p => Execute(p.GetValue(input)!, p.GetValue(output)!, p.GetValue(inputs), p.GetValue(outputs), stdout));
+        var labels = LabelsOption();
+        var cmd = new Command("convert", "Convert a graph between file formats, chosen by the file extensions") { input, output, inputs, outputs, labels };
+        cmd.SetAction(p => Execute(p.GetValue(input)!, p.GetValue(output)!, p.GetValue(inputs), p.GetValue(outputs), stdout, p.GetValue(labels)));
         return cmd;
     }
 
-    public static int Execute(string inPath, string outPath, string? inputs, string? outputs, TextWriter stdout)
+    public static int Execute(string inPath, string outPath, string? inputs, string? outputs, TextWriter stdout, string? labels = null)
     {
         var format = GraphFiles.FormatOf(outPath);
-        var g = GraphFiles.Read(inPath, inputs, outputs);
+        var g = GraphFiles.Read(inPath, inputs, outputs, labels);
         // The canonical form carries no position hints (docs/formats.md), so .ograph output is exactly it.
         var text = format == GraphFileFormat.Ograph ? Graphs.CanonicalForm.Write(g) : GraphFiles.Write(g, format);
-        SafeFile.WriteAllText(outPath, text, inPath);
-        stdout.WriteLine($"wrote {outPath}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + TerminalsNote(g, format));
+        SafeFile.WriteAllText(outPath, text, labels is null ? [inPath] : [inPath, labels]);
+        stdout.WriteLine($"wrote {outPath}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + TerminalsNote(g, format) + LabelsNote(g, format));
         return ExitCode.Flow;
     }
 
@@ -41,4 +42,14 @@ public static class ConvertCommand
         => format is GraphFileFormat.Graph6 or GraphFileFormat.Sparse6 or GraphFileFormat.MatrixMarket && g.Inputs.Count + g.Outputs.Count > 0
             ? " (this format keeps no inputs or outputs: name them with --inputs and --outputs when reading it)"
             : "";
+
+    /// <summary>A reminder when a file cannot hold the measurement labels it was written with.</summary>
+    public static string LabelsNote(Graphs.OpenGraph g, GraphFileFormat format)
+        => format is GraphFileFormat.Graph6 or GraphFileFormat.Sparse6 or GraphFileFormat.MatrixMarket && g.HasLabels
+            ? " (this format keeps no measurement labels: give them with --labels when reading it)"
+            : "";
+
+    /// <summary>The --labels option shared by the commands that read a graph file.</summary>
+    public static Option<string?> LabelsOption() => new("--labels")
+        { Description = "measurement labels of a .g6, .s6 or .mtx graph: a file with one NODE LABEL a line (XY, XZ, YZ, X, Y or Z)" };
 }

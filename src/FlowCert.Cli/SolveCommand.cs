@@ -18,29 +18,31 @@ public static class SolveCommand
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
         var field = new Option<string>("--field") { Description = "Q (rationals, continuous variables) or a prime p (qudits of dimension p)", DefaultValueFactory = _ => "Q" };
-        var flow = new Option<string>("--flow") { Description = "general or causal", DefaultValueFactory = _ => "general" };
+        var flow = new Option<string>("--flow") { Description = "general, causal or pauli (pauli and measurement labels need --field 2)", DefaultValueFactory = _ => "general" };
+        var labels = ConvertCommand.LabelsOption();
         var output = new PathOption("--out") { Description = "write the certificate (JSON) to this file" };
         var json = new Option<bool>("--json") { Description = "print one JSON object instead of the summary" };
-        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs)));
+        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs, labels };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs), p.GetValue(labels)));
         return cmd;
     }
 
     public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout,
-        string? inputs = null, string? outputs = null)
+        string? inputs = null, string? outputs = null, string? labels = null)
     {
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
-        var g = GraphFiles.Read(graphPath, inputs, outputs);
+        var g = GraphFiles.Read(graphPath, inputs, outputs, labels);
         var parseSeconds = clock.Elapsed.TotalSeconds;
         clock.Restart();
         FlowResult result;
         try { result = FlowSolver.Solve(g, spec, kind); }
         catch (WeightNotInFieldException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
+        catch (UnsupportedLabelsException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
         var solveSeconds = clock.Elapsed.TotalSeconds;
         clock.Restart();
-        if (outPath is not null) SafeFile.WriteAllText(outPath, CertificateWriter.Write(result), graphPath);
+        if (outPath is not null) SafeFile.WriteAllText(outPath, CertificateWriter.Write(result), labels is null ? [graphPath] : [graphPath, labels]);
         var writeSeconds = clock.Elapsed.TotalSeconds;
         if (json) WriteJson(stdout, result, parseSeconds, solveSeconds, writeSeconds);
         else Summary.Write(stdout, graphPath, result, outPath);

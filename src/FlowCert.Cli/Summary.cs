@@ -20,12 +20,16 @@ public static class Summary
         }
         o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
         o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
+        if (g.HasLabels)
+            o.WriteLine("labels    " + string.Join(", ", MeasurementLabels.All.Skip(1)
+                .Select(l => (l, n: g.Labels.Values.Count(x => x == l))).Where(t => t.n > 0).Select(t => $"{t.n} {MeasurementLabels.Name(t.l)}")) + ", the rest XY");
         if (r.VanishedEdges.Count > 0)
             o.WriteLine("warning   " + VanishingEdges.Warning(g, r.Field, r.VanishedEdges));
         if (r.Obstruction is { } blocked)
         {
             o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");
-            if (r.Kind == FlowKind.General) o.WriteLine($"          {blocked.Witnesses.Count} left-kernel witness(es) prove no node of it can be corrected");
+            if (blocked.NodeWitnesses is { } perNode) o.WriteLine($"          {perNode.Count} witness(es), one per node, prove no node of it can be corrected (measurement labels)");
+            else if (r.Kind == FlowKind.General) o.WriteLine($"          {blocked.Witnesses.Count} left-kernel witness(es) prove no node of it can be corrected");
             else o.WriteLine("          every possible corrector touches zero or at least two of its nodes");
         }
         else

@@ -66,7 +66,8 @@ public static class CertificateReader
         var version = Required(root, "version");
         if (version.Type != JTokenType.Integer) throw Bad(version, $"version must be a whole number, not {Excerpt.Of(version.ToString(Newtonsoft.Json.Formatting.None))}");
         if (SmallInteger(version) is not { } v) throw Bad(version, "version is a number too large for 64 bits");
-        if (v != CertificateWriter.Version) throw Bad(version, $"unknown version {v}: this reader knows version {CertificateWriter.Version}");
+        if (v != CertificateWriter.Version && v != CertificateWriter.LabelledVersion)
+            throw Bad(version, $"unknown version {v}: this reader knows versions {CertificateWriter.Version} and {CertificateWriter.LabelledVersion}");
         var verdict = Str(Required(root, "verdict"), "verdict");
         var verdictKeys = verdict switch
         {
@@ -87,6 +88,11 @@ public static class CertificateReader
 
         if (Required(root, "graph") is not JObject graphObject) throw Bad(root["graph"], "graph must be an object");
         var graph = GraphJson.FromObject(graphObject, source);
+        bool labelled = graph.HasLabels || kind == FlowKind.Pauli;
+        if (labelled != (v == CertificateWriter.LabelledVersion))
+            throw Bad(version, labelled
+                ? $"version {v} cannot carry measurement labels or Pauli flow: they need version {CertificateWriter.LabelledVersion}"
+                : $"version {v} is for graphs with a label other than XY or for Pauli flow; this one is version {CertificateWriter.Version}");
         var hash = Str(Required(root, "graphSha256"), "graphSha256");
         if (hash != CanonicalForm.Sha256(graph)) throw Bad(root["graphSha256"], "graphSha256 is not the SHA-256 of the embedded graph's canonical form");
 
@@ -101,6 +107,21 @@ public static class CertificateReader
         {
             if (t is not JObject o) throw Bad(t, $"{what} must be an object");
             return new NodeVector(o.Properties().Select(p => (Key(p), Str(p.Value, what))).OrderBy(x => x.Item1).ToList());
+        }
+
+        List<RowWitness> NodeWitnesses(JToken t)
+        {
+            if (t is not JObject o) throw Bad(t, "witnesses must be an object mapping each blocked node to {\"rows\": [...], \"self\": true|false}");
+            var list = new List<RowWitness>();
+            foreach (var p in o.Properties())
+            {
+                if (p.Value is not JObject w) throw Bad(p.Value, $"the witness of {p.Name} must be an object");
+                OnlyKeys(w, ["rows", "self"], $"the witness of {p.Name}");
+                var self = Required(w, "self");
+                if (self.Type != JTokenType.Boolean) throw Bad(self, "self must be true or false");
+                list.Add(new RowWitness(Key(p), Nodes(Required(w, "rows"), "rows"), (bool)self));
+            }
+            return list;
         }
 
         var rounds = new List<IReadOnlyList<int>>();
@@ -120,11 +141,17 @@ public static class CertificateReader
         else
         {
             if (Required(root, "obstruction") is not JObject ob) throw Bad(root["obstruction"], "obstruction must be an object");
-            OnlyKeys(ob, kind == FlowKind.General ? ["blocked", "witnesses"] : ["blocked"], "obstruction");
-            var witnesses = kind == FlowKind.General
-                ? (Required(ob, "witnesses") as JArray ?? throw Bad(ob["witnesses"], "witnesses must be a list")).Select(w => Vector(w, "a witness")).ToList()
-                : [];
-            obstruction = new BlockedSet(Nodes(Required(ob, "blocked"), "blocked"), witnesses);
+            OnlyKeys(ob, FlowKinds.HasWitnesses(kind) ? ["blocked", "witnesses"] : ["blocked"], "obstruction");
+            var blocked = Nodes(Required(ob, "blocked"), "blocked");
+            if (labelled)
+                obstruction = new BlockedSet(blocked, []) { NodeWitnesses = NodeWitnesses(Required(ob, "witnesses")) };
+            else
+            {
+                var witnesses = kind == FlowKind.General
+                    ? (Required(ob, "witnesses") as JArray ?? throw Bad(ob["witnesses"], "witnesses must be a list")).Select(w => Vector(w, "a witness")).ToList()
+                    : [];
+                obstruction = new BlockedSet(blocked, witnesses);
+            }
         }
         return new FlowResult
         {

@@ -13,8 +13,13 @@ public static class CertificateWriter
 {
     /// <summary>The value of the certificate's <c>format</c> key.</summary>
     public const string Format = "flowcert-certificate";
-    /// <summary>The value of the certificate's <c>version</c> key.</summary>
+    /// <summary>The value of the certificate's <c>version</c> key for XY-only graphs and kinds general and causal.</summary>
     public const int Version = 1;
+    /// <summary>The version of certificates whose graph has a label other than XY or whose flow is <c>pauli</c>.</summary>
+    public const int LabelledVersion = 2;
+
+    /// <summary>The version a result is written with: 2 when its graph has labels or its kind is Pauli, else 1.</summary>
+    public static int VersionOf(FlowResult r) => r.Graph.HasLabels || r.Kind == FlowKind.Pauli ? LabelledVersion : Version;
     /// <summary>The producer name written into every certificate.</summary>
     public const string ProducerName = "flowcert";
     /// <summary>Written into every certificate; kept in step with the Version in Directory.Build.props.</summary>
@@ -39,7 +44,7 @@ public static class CertificateWriter
         var sb = new StringBuilder();
         sb.Append("{\n");
         sb.Append($"  \"format\": {Quote(Format)},\n");
-        sb.Append($"  \"version\": {Version},\n");
+        sb.Append($"  \"version\": {VersionOf(r)},\n");
         sb.Append($"  \"flow\": {Quote(KindName(r.Kind))},\n");
         sb.Append($"  \"field\": {Quote(r.Field.Name)},\n");
         sb.Append($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
@@ -56,7 +61,10 @@ public static class CertificateWriter
             sb.Append("  \"verdict\": \"noflow\",\n");
             sb.Append("  \"obstruction\": {\n");
             sb.Append($"    \"blocked\": {List(r.Obstruction.Nodes)}");
-            if (r.Kind == FlowKind.General)
+            if (r.Obstruction.NodeWitnesses is { } perNode)
+                sb.Append(",\n    \"witnesses\": ").Append(Block(perNode.Select(w =>
+                    $"{N(w.Node)}: {{\"rows\": {List(w.Rows)}, \"self\": {(w.Self ? "true" : "false")}}}"), "    ", '{', '}'));
+            else if (r.Kind == FlowKind.General)
                 sb.Append(",\n    \"witnesses\": ").Append(Block(r.Obstruction.Witnesses.Select(Vector), "    ", '[', ']'));
             sb.Append("\n  },\n");
         }

@@ -10,30 +10,50 @@ public enum FlowKind
     General,
     /// <summary>Causal flow: one corrector per measured node.</summary>
     Causal,
+    /// <summary>Pauli flow over F_2 (flows.md section 9.3): measurement labels including the Pauli axes.</summary>
+    Pauli,
 }
 
 /// <summary>The one place where a kind of flow is named: in certificates and on the command line, and in prose.</summary>
 public static class FlowKinds
 {
-    /// <summary>The name in certificates and on the command line: <c>general</c> or <c>causal</c>.</summary>
-    public static string Name(FlowKind kind) => kind == FlowKind.Causal ? "causal" : "general";
+    /// <summary>The name in certificates and on the command line: <c>general</c>, <c>causal</c> or <c>pauli</c>.</summary>
+    public static string Name(FlowKind kind) => kind switch { FlowKind.Causal => "causal", FlowKind.Pauli => "pauli", _ => "general" };
 
-    /// <summary>The adjective in prose and pictures: <c>generalized</c> or <c>causal</c>.</summary>
-    public static string Adjective(FlowKind kind) => kind == FlowKind.Causal ? "causal" : "generalized";
+    /// <summary>The adjective in prose and pictures: <c>generalized</c>, <c>causal</c> or <c>Pauli</c>.</summary>
+    public static string Adjective(FlowKind kind) => kind switch { FlowKind.Causal => "causal", FlowKind.Pauli => "Pauli", _ => "generalized" };
 
     /// <summary>Reads a name written by <see cref="Name"/>; false for anything else.</summary>
     public static bool TryParse(string text, out FlowKind kind)
     {
-        kind = text == "causal" ? FlowKind.Causal : FlowKind.General;
-        return text is "general" or "causal";
+        kind = text switch { "causal" => FlowKind.Causal, "pauli" => FlowKind.Pauli, _ => FlowKind.General };
+        return text is "general" or "causal" or "pauli";
     }
+
+    /// <summary>True for the kinds whose proof of absence carries witnesses (all but causal).</summary>
+    public static bool HasWitnesses(FlowKind kind) => kind != FlowKind.Causal;
 }
 
 /// <summary>A sparse vector over nodes with canonical field-element text, entries sorted by node index.</summary>
 public sealed record NodeVector(IReadOnlyList<(int Node, string Value)> Entries);
 
 /// <summary>A proof that no flow exists: a blocked set and, for generalized flow, left-kernel witnesses.</summary>
-public sealed record BlockedSet(IReadOnlyList<int> Nodes, IReadOnlyList<NodeVector> Witnesses);
+public sealed record BlockedSet(IReadOnlyList<int> Nodes, IReadOnlyList<NodeVector> Witnesses)
+{
+    /// <summary>
+    /// For a labelled graph or Pauli flow (flows.md 9.5): one witness per blocked node, in the order of
+    /// <see cref="Nodes"/>; null otherwise (then <see cref="Witnesses"/> holds the left-kernel vectors).
+    /// </summary>
+    public IReadOnlyList<RowWitness>? NodeWitnesses { get; init; }
+}
+
+/// <summary>
+/// A witness y_v of flows.md 9.5 for blocked node <paramref name="Node"/>: the rows of v's system that y
+/// selects (over F_2 a vector is a set). <paramref name="Rows"/> are the blocked nodes whose condition row
+/// is taken (sorted); <paramref name="Self"/> says whether v's own row "v in p(v)" is taken
+/// (docs/algorithms.md, "Labelled systems").
+/// </summary>
+public sealed record RowWitness(int Node, IReadOnlyList<int> Rows, bool Self);
 
 /// <summary>The outcome of a flow search: a schedule with correction vectors, or an obstruction.</summary>
 public sealed record FlowResult

@@ -8,16 +8,21 @@ public static class FlowSolver
 {
     /// <summary>
     /// Solves one open graph. Throws <see cref="WeightNotInFieldException"/> when a weight has no value in
-    /// the field (its denominator is divisible by p).
+    /// the field (its denominator is divisible by p), and <see cref="UnsupportedLabelsException"/> when
+    /// the labels or the kind need qubits or Pauli flow (<see cref="LabelRules"/>).
     /// </summary>
     public static FlowResult Solve(OpenGraph graph, FieldSpec field, FlowKind kind)
-        => field.Accept(new Run(graph, field, kind));
+    {
+        LabelRules.Check(graph, field, kind);
+        return field.Accept(new Run(graph, field, kind));
+    }
 
     private sealed class Run(OpenGraph graph, FieldSpec spec, FlowKind kind) : IFieldVisitor<FlowResult>
     {
         public FlowResult Visit<T, TField>(TField field) where T : struct where TField : struct, IField<T>
         {
             var g = new FieldGraph<T, TField>(graph, field, spec);
+            if (kind == FlowKind.Pauli || graph.HasLabels) return LabelledFlowFinder.Find(g, kind);
             return kind == FlowKind.Causal ? CausalFlowFinder.Find(g) : GeneralFlowFinder.Find(g);
         }
     }

@@ -57,6 +57,7 @@ public static partial class OgraphReader
         private readonly Dictionary<int, int> inputs = new(), outputs = new();
         private readonly List<(int Id, int Line, int Column, string Keyword)> references = new();
         private readonly Dictionary<int, PositionHint> positions = new();
+        private readonly Dictionary<int, (MeasurementLabel Label, int Line, int Column)> labels = new();
         private readonly Dictionary<string, Rational> weightCache;
         private readonly Dictionary<string, Rational>.AlternateLookup<ReadOnlySpan<char>> weightLookup;
 
@@ -196,8 +197,9 @@ public static partial class OgraphReader
             }
             else if (Is(0, "edge")) Edge();
             else if (Is(0, "at")) At();
+            else if (Is(0, "measure")) Measure();
             else if (Is(0, "plane")) throw Error(0, "'plane' is reserved for a later version of the format");
-            else throw Error(0, $"unknown keyword '{Formats.Excerpt.Of(TokText(0))}': expected input, output, node, edge or at");
+            else throw Error(0, $"unknown keyword '{Formats.Excerpt.Of(TokText(0))}': expected input, output, node, edge, at or measure");
         }
 
         private void Terminals(Dictionary<int, int> target, string keyword)
@@ -255,11 +257,26 @@ public static partial class OgraphReader
             positions[n] = new PositionHint(coords[0], coords[1]);
         }
 
+        private void Measure()
+        {
+            if (count != 3) throw Error(count > 3 ? 3 : 0, $"'measure' takes a node name and a label ({MeasurementLabels.Choices})");
+            int n = Name(1);
+            if (!MeasurementLabels.TryParse(Tok(2), out var label))
+                throw Error(2, $"unknown label '{Formats.Excerpt.Of(TokText(2))}': write {MeasurementLabels.Choices}");
+            if (labels.TryGetValue(n, out var first))
+                throw Error(1, $"node {names[n]} has two labels (lines {first.Line} and {lineNo})");
+            labels[n] = (label, lineNo, starts[1] + 1);
+            references.Add((n, lineNo, starts[1] + 1, "measure"));
+        }
+
         public OpenGraph Build()
         {
             foreach (var (id, line, column, keyword) in references)
                 if (!declared[id])
                     throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{keyword}': declare it with an 'edge' or 'node' line");
+            foreach (var (id, (_, line, column)) in labels)
+                if (outputs.TryGetValue(id, out var outputLine))
+                    throw new GraphFormatException(fileName, line, column, $"node {names[id]} is an output (line {outputLine}): outputs are never measured and carry no label");
             // Declared names in ordinal order; rank maps a name id to its node index.
             var order = new List<int>(names.Count);
             for (int id = 0; id < names.Count; id++) if (declared[id]) order.Add(id);
@@ -279,7 +296,11 @@ public static partial class OgraphReader
             foreach (var id in outputs.Keys) outputIndices.Add(rank[id]);
             var hints = new Dictionary<int, PositionHint>(positions.Count);
             foreach (var (id, hint) in positions) hints[rank[id]] = hint;
-            return OpenGraph.FromIndices(sortedNames, us, vs, weights.ToArray(), inputIndices, outputIndices, hints);
+            var graph = OpenGraph.FromIndices(sortedNames, us, vs, weights.ToArray(), inputIndices, outputIndices, hints);
+            if (labels.Count == 0) return graph;
+            var byIndex = new Dictionary<int, MeasurementLabel>(labels.Count);
+            foreach (var (id, entry) in labels) byIndex[rank[id]] = entry.Label;
+            return graph.WithLabels(byIndex);
         }
     }
 }

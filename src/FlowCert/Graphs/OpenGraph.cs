@@ -24,7 +24,33 @@ public sealed class OpenGraph
     public IReadOnlySet<int> Outputs { get; }
     /// <summary>Drawing hints by node index (ignored by the solver).</summary>
     public IReadOnlyDictionary<int, PositionHint> Positions { get; }
+    /// <summary>The measurement label of every measured node whose label is not XY, by node index (flows.md section 9).</summary>
+    public IReadOnlyDictionary<int, MeasurementLabel> Labels { get; private init; } = EmptyLabels;
+    private static readonly Dictionary<int, MeasurementLabel> EmptyLabels = new();
     private readonly Dictionary<string, int> index;
+
+    /// <summary>The label of a node: XY unless one was given.</summary>
+    public MeasurementLabel Label(int v) => Labels.TryGetValue(v, out var l) ? l : MeasurementLabel.XY;
+
+    /// <summary>True when some node has a label other than XY.</summary>
+    public bool HasLabels => Labels.Count > 0;
+
+    /// <summary>
+    /// The same graph with these labels (by node index) in place of its own; XY entries are dropped (XY is
+    /// the default). Throws <see cref="ArgumentException"/> for a label on an output.
+    /// </summary>
+    public OpenGraph WithLabels(IReadOnlyDictionary<int, MeasurementLabel> labels)
+    {
+        var kept = new Dictionary<int, MeasurementLabel>();
+        foreach (var (v, l) in labels)
+        {
+            if (v < 0 || v >= NodeCount) throw new ArgumentException($"no node with index {v}");
+            if (Outputs.Contains(v)) throw new ArgumentException($"node {Names[v]} is an output: outputs are never measured and carry no label");
+            if (l != MeasurementLabel.XY) kept[v] = l;
+        }
+        return new OpenGraph(Names.ToArray(), (List<WeightedEdge>)Edges, (HashSet<int>)Inputs, (HashSet<int>)Outputs,
+            (Dictionary<int, PositionHint>)Positions) { Labels = kept };
+    }
 
     /// <summary>The number of nodes |V|.</summary>
     public int NodeCount => Names.Count;

@@ -49,6 +49,22 @@ public static class GraphFiles
     /// for the others they must be null.
     /// </summary>
     public static OpenGraph Read(string path, string? inputs = null, string? outputs = null)
+        => Read(path, inputs, outputs, null);
+
+    /// <summary>
+    /// Reads a graph file as <see cref="Read(string, string?, string?)"/> does; for graph6, sparse6 and
+    /// Matrix Market files, <paramref name="labelsPath"/> names a labels file (docs/formats.md) read after
+    /// the inputs and outputs are set. The formats that carry their own labels refuse one.
+    /// </summary>
+    public static OpenGraph Read(string path, string? inputs, string? outputs, string? labelsPath)
+    {
+        if (labelsPath is null) return ReadUnlabelled(path, inputs, outputs);
+        if (HasTerminals(FormatOf(path)))
+            throw new GraphFileException($"{path} carries its own measurement labels: a separate labels file is for .g6, .s6 and .mtx files only");
+        return LabelsFile.Apply(ReadUnlabelled(path, inputs, outputs), labelsPath);
+    }
+
+    private static OpenGraph ReadUnlabelled(string path, string? inputs, string? outputs)
     {
         var format = FormatOf(path);
         if (format == GraphFileFormat.Dot)
@@ -61,7 +77,7 @@ public static class GraphFiles
         return Parse(InputText.ReadAll(path), path, format, inputs, outputs);
     }
 
-    /// <summary>Parses text of a given format; see <see cref="Read"/>.</summary>
+    /// <summary>Parses text of a given format; see <see cref="Read(string, string?, string?)"/>.</summary>
     public static OpenGraph Parse(string text, string fileName, GraphFileFormat format, string? inputs = null, string? outputs = null)
     {
         RefuseSeparateTerminals(fileName, format, inputs, outputs);

@@ -15,6 +15,9 @@ public static class GraphJson
     /// <summary>The keys of the object, in the order written.</summary>
     public static readonly string[] Keys = ["inputs", "outputs", "nodes", "edges"];
 
+    /// <summary>The optional key holding measurement labels other than XY (written only when there are some).</summary>
+    public const string LabelsKey = "labels";
+
     /// <summary>The graph as a JSON file: the object at indentation zero, then LF.</summary>
     public static string Write(OpenGraph g) => WriteObject(g, "") + "\n";
 
@@ -36,6 +39,10 @@ public static class GraphJson
             sb.Append("[\n")
               .Append(string.Join(",\n", g.Edges.Select(e => $"{indent}    [{N(e.U)}, {N(e.V)}, {JsonSource.Quote(e.Weight.ToString())}]")))
               .Append($"\n{indent}  ]");
+        if (g.HasLabels)
+            sb.Append($",\n{indent}  \"{LabelsKey}\": {{")
+              .Append(string.Join(", ", g.Labels.OrderBy(kv => kv.Key).Select(kv => $"{N(kv.Key)}: {JsonSource.Quote(MeasurementLabels.Name(kv.Value))}")))
+              .Append('}');
         return sb.Append($"\n{indent}}}").ToString();
     }
 
@@ -52,8 +59,8 @@ public static class GraphJson
     {
         GraphFormatException At(JToken t, string problem) => source.At(t, problem);
         foreach (var p in obj.Properties())
-            if (!Keys.Contains(p.Name))
-                throw At(p, $"unknown key '{p.Name}': a graph object has exactly inputs, outputs, nodes and edges");
+            if (!Keys.Contains(p.Name) && p.Name != LabelsKey)
+                throw At(p, $"unknown key '{p.Name}': a graph object has exactly inputs, outputs, nodes and edges, and optionally labels");
         foreach (var k in Keys)
             if (obj[k] is null) throw At(obj, $"key '{k}' is missing: a graph object has exactly inputs, outputs, nodes and edges");
 
@@ -106,6 +113,19 @@ public static class GraphJson
             if (!pairs.Add(string.CompareOrdinal(u, v) < 0 ? (u, v) : (v, u))) throw At(t, $"edge {u} {v} appears twice");
             edges.Add((u, v, w));
         }
-        return new OpenGraph(nodes, edges, inputs, outputs);
+        var graph = new OpenGraph(nodes, edges, inputs, outputs);
+        if (obj[LabelsKey] is not { } labelsToken) return graph;
+        if (labelsToken is not JObject labelsObject) throw At(labelsToken, "labels must be an object mapping node names to XY, XZ, YZ, X, Y or Z");
+        var labels = new Dictionary<int, MeasurementLabel>();
+        var outputSet = outputs.ToHashSet(StringComparer.Ordinal);
+        foreach (var p in labelsObject.Properties())
+        {
+            if (!known.Contains(p.Name)) throw At(p, $"unknown node {Excerpt.Of(p.Name)} in labels: list it in nodes");
+            if (outputSet.Contains(p.Name)) throw At(p, $"node {p.Name} is an output: outputs are never measured and carry no label");
+            if (p.Value.Type != JTokenType.String || !MeasurementLabels.TryParse((string)p.Value!, out var label))
+                throw At(p.Value, $"unknown label for node {p.Name}: write {MeasurementLabels.Choices}");
+            labels[graph.IndexOf(p.Name)] = label;
+        }
+        return graph.WithLabels(labels);
     }
 }
