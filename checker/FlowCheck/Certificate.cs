@@ -15,9 +15,9 @@ public static class Certificate
         var format = Json.String(root["format"], "format");
         if (format != "flowcert-certificate") throw new InvalidCertificate($"unknown format \"{format}\"");
         var version = Json.Integer(root["version"], "version");
-        if (version != 1) throw new InvalidCertificate($"unknown version {version} (this checker knows version 1)");
+        if (version != 1 && version != 2) throw new InvalidCertificate($"unknown version {version} (this checker knows versions 1 and 2)");
         var flow = Json.String(root["flow"], "flow");
-        if (flow is not ("general" or "causal")) throw new InvalidCertificate($"unknown flow \"{flow}\" (expected general or causal)");
+        if (flow is not ("general" or "causal" or "pauli")) throw new InvalidCertificate($"unknown flow \"{flow}\" (expected general, causal or pauli)");
         var field = Field.Parse(Json.String(root["field"], "field"));
         if (root["producer"] is { } producer)
             foreach (var key in new[] { "name", "version" })
@@ -28,6 +28,10 @@ public static class Certificate
         if (claimed != hash) throw new InvalidCertificate($"graphSha256 is {claimed} but the embedded graph hashes to {hash}");
         if (fileGraph is not null && fileGraph.Sha256() != hash)
             throw new InvalidCertificate($"graph file {graphPath} (sha256 {fileGraph.Sha256()}) differs from the embedded graph (sha256 {hash})");
+        var labelled = graph.Labels.Count > 0 || flow == "pauli";
+        if (labelled != (version == 2))
+            throw new InvalidCertificate($"version {version}: version 2 is exactly for graphs with a label other than XY and for pauli flow");
+        if (labelled) Labelled.CheckHeader(graph, field, flow);
         var g = new FieldGraph(graph, field);
         var verdict = Json.String(root["verdict"], "verdict");
         var causal = flow == "causal";
@@ -35,12 +39,12 @@ public static class Certificate
         if (verdict == "flow")
         {
             Absent(root, verdict, "obstruction");
-            proven = $"{flow} flow over {field.Name}, depth {new FlowClaim(g, causal).Check(root)}";
+            proven = $"{flow} flow over {field.Name}, depth {new FlowClaim(g, causal, labelled ? graph : null).Check(root)}";
         }
         else if (verdict == "noflow")
         {
             Absent(root, verdict, "depth", "rounds", "corrections");
-            proven = $"no {flow} flow over {field.Name}, blocked set of {new NoFlowClaim(g, causal).Check(root)} nodes";
+            proven = $"no {flow} flow over {field.Name}, blocked set of {new NoFlowClaim(g, causal, labelled ? graph : null).Check(root)} nodes";
         }
         else throw new InvalidCertificate($"unknown verdict \"{verdict}\" (expected flow or noflow)");
         var lines = new List<string> { $"valid: {proven}, graph sha256 {hash}" };

@@ -7,7 +7,7 @@ public static class EmbeddedGraph
 {
     public static OpenGraph Read(JToken? token)
     {
-        var g = Json.Object(token, "graph", "inputs", "outputs", "nodes", "edges");
+        var g = Json.Object(token, "graph", "inputs", "outputs", "nodes", "edges", "labels");
         var nodes = Names(g["nodes"], "graph.nodes");
         var known = nodes.ToHashSet();
         var inputs = Names(g["inputs"], "graph.inputs");
@@ -29,7 +29,20 @@ public static class EmbeddedGraph
                 throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} after {edges[^1].U} {edges[^1].V} (must be sorted, no duplicates)");
             edges.Add(new Edge(u, v, w));
         }
-        return new OpenGraph(inputs, outputs, nodes, edges);
+        var graph = new OpenGraph(inputs, outputs, nodes, edges);
+        if (g["labels"] is null) return graph;
+        var labels = Json.NodeMap(g["labels"], "graph.labels");
+        if (!labels.HasValues) throw new InvalidCertificate("graph.labels is empty: it is written only when some node is not XY");
+        foreach (var p in labels.Properties())
+        {
+            var label = Json.String(p.Value, $"graph.labels.{p.Name}");
+            if (!known.Contains(p.Name) || outputs.Contains(p.Name))
+                throw new InvalidCertificate($"graph.labels: {p.Name} is not a measured node");
+            if (label == "XY" || !OpenGraph.LabelNames.Contains(label))
+                throw new InvalidCertificate($"graph.labels.{p.Name}: \"{Json.Cut(label)}\" is not one of XZ, YZ, X, Y, Z (XY is not written)");
+            graph.Labels[p.Name] = label;
+        }
+        return graph;
     }
 
     static int Compare(Edge before, string u, string v)

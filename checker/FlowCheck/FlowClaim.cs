@@ -4,7 +4,7 @@ namespace FlowCheck;
 
 /// <summary>Checks a "flow" verdict: the rounds and, per measured node, its correction vector
 /// (flows.md section 3 for general flow, section 4 for causal flow).</summary>
-public sealed class FlowClaim(FieldGraph g, bool causal)
+public sealed class FlowClaim(FieldGraph g, bool causal, OpenGraph? labelled = null)
 {
     readonly Dictionary<string, int> round = [];
 
@@ -22,7 +22,11 @@ public sealed class FlowClaim(FieldGraph g, bool causal)
         foreach (var p in corrections.Properties().Where(p => !round.ContainsKey(p.Name)))
             throw new InvalidCertificate($"corrections: {p.Name} is not a measured node");
         foreach (var v in measured)
-            CheckCorrection(v, corrections[v] ?? throw new InvalidCertificate($"node {v}: no correction vector"));
+        {
+            var token = corrections[v] ?? throw new InvalidCertificate($"node {v}: no correction vector");
+            if (labelled is null) CheckCorrection(v, token);
+            else Labelled.CheckCorrection(g, labelled, v, ReadSet(v, token), u => IsLater(u, v), $"node {v} (round {round[v]})");
+        }
         return rounds.Count;
     }
 
@@ -42,6 +46,21 @@ public sealed class FlowClaim(FieldGraph g, bool causal)
 
     /// <summary>Where a node that is not later than another sits (never an output: outputs are always later).</summary>
     string Position(string u) => $"in round {round[u]}";
+
+    /// <summary>Over F2 with labels (flows.md section 9): the support of a correction, entries "1" on known non-inputs.</summary>
+    HashSet<string> ReadSet(string v, JToken token)
+    {
+        var set = new HashSet<string>();
+        foreach (var p in Json.NodeMap(token, $"corrections.{v}").Properties())
+        {
+            var text = Json.String(p.Value, $"corrections.{v}.{p.Name}");
+            if (!g.Nodes.Contains(p.Name)) throw new InvalidCertificate($"node {v}: correction on unknown node {p.Name}");
+            if (text != "1") throw new InvalidCertificate($"node {v}: p_{v}({p.Name}) = \"{Json.Cut(text)}\" is not 1");
+            if (g.Inputs.Contains(p.Name)) throw new InvalidCertificate($"node {v}: correction on input {p.Name}");
+            set.Add(p.Name);
+        }
+        return set;
+    }
 
     void CheckCorrection(string v, JToken token)
     {

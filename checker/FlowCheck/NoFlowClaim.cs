@@ -4,7 +4,7 @@ namespace FlowCheck;
 
 /// <summary>Checks a "noflow" verdict: the blocked set U and, for general flow, the left-kernel
 /// witnesses of A[U, C] with C = (V \ I) \ U (flows.md section 6).</summary>
-public sealed class NoFlowClaim(FieldGraph g, bool causal)
+public sealed class NoFlowClaim(FieldGraph g, bool causal, OpenGraph? labelled = null)
 {
     /// <summary>Returns the size of the blocked set proven, or throws naming the first failure.</summary>
     public int Check(JObject root)
@@ -18,7 +18,8 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal)
         foreach (var v in blocked.Where(v => !g.IsMeasured(v)))
             throw new InvalidCertificate($"obstruction.blocked: {v} is not a measured node");
         var u = blocked.ToHashSet();
-        if (causal) CheckCausal(blocked, u);
+        if (labelled is not null) Labelled.CheckWitnesses(g, labelled, Json.NodeMap(obstruction["witnesses"], "obstruction.witnesses"), blocked, u);
+        else if (causal) CheckCausal(blocked, u);
         else CheckWitnesses(Json.Array(obstruction["witnesses"], "obstruction.witnesses"), blocked, u);
         return blocked.Count;
     }

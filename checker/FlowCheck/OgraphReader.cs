@@ -18,6 +18,7 @@ public static class OgraphReader
         var outputs = new Dictionary<string, int>();
         var edges = new Dictionary<(string, string), (Rational W, int Line)>();
         var mentions = new List<(string Name, int Line, int Column)>();
+        var labels = new Dictionary<string, (string Label, int Line, int Column)>();
         var lines = text.Split('\n');
         for (var i = 0; i < lines.Length; i++)
         {
@@ -58,6 +59,14 @@ public static class OgraphReader
                     for (var k = 2; k < 4; k++)
                         if (!Coordinate.IsMatch(tokens[k].Text)) throw Error(k, $"bad coordinate \"{tokens[k].Text}\"");
                     break;
+                case "measure":
+                    if (tokens.Count != 3) throw Error(0, "wrong number of tokens: measure NODE LABEL");
+                    var node = NameAt(1);
+                    if (!OpenGraph.LabelNames.Contains(tokens[2].Text)) throw Error(2, $"unknown label \"{tokens[2].Text}\"");
+                    if (labels.TryGetValue(node, out var had)) throw Error(1, $"{node} has two labels (lines {had.Line} and {line})");
+                    labels[node] = (tokens[2].Text, line, tokens[1].Column);
+                    mentions.Add((node, line, tokens[1].Column));
+                    break;
                 case "plane":
                     throw Error(0, "plane is reserved for a later version");
                 default:
@@ -68,7 +77,13 @@ public static class OgraphReader
             throw new UnreadableInput($"{path}:{line}:{column}: unknown node {name}");
         var edgeList = edges.Select(e => new Edge(e.Key.Item1, e.Key.Item2, e.Value.W))
             .OrderBy(e => e.U, StringComparer.Ordinal).ThenBy(e => e.V, StringComparer.Ordinal).ToList();
-        return new OpenGraph(Sorted(inputs.Keys), Sorted(outputs.Keys), Sorted(nodes), edgeList);
+        var graph = new OpenGraph(Sorted(inputs.Keys), Sorted(outputs.Keys), Sorted(nodes), edgeList);
+        foreach (var (node, (label, line, column)) in labels)
+        {
+            if (outputs.ContainsKey(node)) throw new UnreadableInput($"{path}:{line}:{column}: label on output {node}");
+            if (label != "XY") graph.Labels[node] = label;
+        }
+        return graph;
     }
 
     static List<string> Sorted(IEnumerable<string> names) => names.Order(StringComparer.Ordinal).ToList();

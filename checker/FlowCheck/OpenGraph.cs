@@ -14,7 +14,15 @@ public sealed record OpenGraph(List<string> Inputs, List<string> Outputs, List<s
 
     public static bool IsName(string text) => Name.IsMatch(text);
 
-    /// <summary>The canonical text of docs/formats.md: input, output, isolated nodes, edges; LF endings.</summary>
+    /// <summary>The measurement labels of flows.md section 9 that differ from XY, by node (XY is never stored).</summary>
+    public SortedDictionary<string, string> Labels { get; init; } = new(StringComparer.Ordinal);
+
+    public static readonly string[] LabelNames = ["XY", "XZ", "YZ", "X", "Y", "Z"];
+
+    /// <summary>The label of a node: XY unless another was given.</summary>
+    public string Label(string node) => Labels.GetValueOrDefault(node, "XY");
+
+    /// <summary>The canonical text of docs/formats.md: input, output, isolated nodes, edges, labels; LF endings.</summary>
     public string Canonical()
     {
         var text = new StringBuilder();
@@ -25,6 +33,7 @@ public sealed record OpenGraph(List<string> Inputs, List<string> Outputs, List<s
             text.Append($"node {node}\n");
         foreach (var e in Edges)
             text.Append($"edge {e.U} {e.V} {e.W}\n");
+        foreach (var (node, label) in Labels) text.Append($"measure {node} {label}\n");
         return text.ToString();
     }
 

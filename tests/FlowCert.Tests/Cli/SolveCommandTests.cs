@@ -207,9 +207,9 @@ public class SolveCommandTests
     {
         using var w = new Workspace();
         var graph = w.Write("wire.ograph", Designs.Wire);
-        var run = Flowcert.InProcess("solve", graph, "--flow", "pauli", "--out", w.PathOf("c.json"));
+        var run = Flowcert.InProcess("solve", graph, "--flow", "spiral", "--out", w.PathOf("c.json"));
         Assert.True(run.ExitCode == 2, run.ToString());
-        Assert.Contains("'pauli' is not a kind of flow", run.Stderr);
+        Assert.Contains("'spiral' is not a kind of flow", run.Stderr);
         w.AssertExactly("wire.ograph");
     }
 

@@ -32,7 +32,7 @@ public class OgraphReaderErrorTests
         var e = Refuse(text, line, column);
         Assert.Contains("unknown keyword", e.Problem);
         Assert.Contains(quoted, e.Problem);
-        Assert.Contains("input, output, node, edge or at", e.Problem); // says what would be accepted
+        Assert.Contains("input, output, node, edge, at or measure", e.Problem); // says what would be accepted
     }
 
     [Theory]
