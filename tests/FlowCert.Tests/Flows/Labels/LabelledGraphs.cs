@@ -1,0 +1,61 @@
+using FlowCert.Algebra;
+using FlowCert.Graphs;
+
+namespace FlowCert.Tests.Flows.Labels;
+
+/// <summary>Seeded random open graphs with measurement labels for the tests (System.Random with a seed is deterministic).</summary>
+public static class LabelledGraphs
+{
+    /// <summary>Weights with a value in F_2; "2" and "-4" vanish there (the solver reports them).</summary>
+    private static readonly string[] Weights = ["1", "1", "1", "-1", "3", "1/3", "2", "-4"];
+    public static readonly MeasurementLabel[] Planes = [MeasurementLabel.XY, MeasurementLabel.XZ, MeasurementLabel.YZ];
+
+    /// <summary>
+    /// A graph of <paramref name="nodes"/> nodes with at most <paramref name="maxMeasured"/> measured, random
+    /// inputs and outputs (they may overlap), and labels drawn from <paramref name="labels"/> for the measured
+    /// nodes, at least one of them not XY.
+    /// </summary>
+    public static OpenGraph Make(Random rng, int nodes, int maxMeasured, MeasurementLabel[] labels)
+    {
+        var names = Enumerable.Range(0, nodes).Select(i => "n" + i).ToArray();
+        double density = 0.2 + 0.5 * rng.NextDouble();
+        var edges = new List<(string, string, Rational)>();
+        for (int i = 0; i < nodes; i++)
+            for (int j = i + 1; j < nodes; j++)
+                if (rng.NextDouble() < density)
+                {
+                    Rational.TryParse(Weights[rng.Next(Weights.Length)], out var w);
+                    edges.Add((names[i], names[j], w));
+                }
+        var outputs = names.Where(_ => rng.NextDouble() < 0.3).ToList();
+        var rest = names.Except(outputs).OrderBy(_ => rng.Next()).ToList();
+        while (nodes - outputs.Count > maxMeasured) { outputs.Add(rest[0]); rest.RemoveAt(0); }
+        var inputs = names.Where(_ => rng.NextDouble() < 0.25).ToList();
+        return WithRandomLabels(rng, new OpenGraph(names, edges, inputs, outputs), labels);
+    }
+
+    /// <summary>
+    /// Paths from inputs to outputs covering the nodes plus random edges (flows are common there), with at
+    /// most 6 measured nodes when <paramref name="nodes"/> is at most 8, labelled as <see cref="Make"/> does.
+    /// </summary>
+    public static OpenGraph MakeWithChains(Random rng, int nodes, MeasurementLabel[] labels)
+    {
+        int chains = Math.Min(nodes, rng.Next(2, 4));
+        var g = Validation.RandomGraphs.MakeWithChains(rng, nodes, chains, 0.35 * rng.NextDouble(), Validation.RandomGraphs.IntegerWeights);
+        return WithRandomLabels(rng, g, labels);
+    }
+
+    /// <summary>Labels from <paramref name="labels"/> on the measured nodes, at least one not XY.</summary>
+    public static OpenGraph WithRandomLabels(Random rng, OpenGraph g, MeasurementLabel[] labels)
+    {
+        var measured = g.Measured;
+        if (measured.Length == 0) return g;
+        var chosen = new Dictionary<int, MeasurementLabel>();
+        // XY often (and mostly on inputs, which can never be corrected when measured in XZ, YZ or Z)
+        foreach (var v in measured)
+            chosen[v] = rng.NextDouble() < (g.Inputs.Contains(v) ? 0.8 : 0.4) ? MeasurementLabel.XY : labels[rng.Next(labels.Length)];
+        if (chosen.Values.All(l => l == MeasurementLabel.XY))
+            chosen[measured[rng.Next(measured.Length)]] = labels.Where(l => l != MeasurementLabel.XY).ElementAt(rng.Next(labels.Length - 1));
+        return g.WithLabels(chosen);
+    }
+}
