@@ -30,7 +30,8 @@ public class SchemaTests
     {
         { "unknown top-level key", "c['extra'] = 1" },
         { "format", "c['format'] = 'other'" },
-        { "version", "c['version'] = 2" },
+        { "version", "c['version'] = 3" },
+        { "version 2 for a causal flow", "c['version'] = 2" },
         { "flow", "c['flow'] = 'pauli'" },
         { "field", "c['field'] = 'F04'" },
         { "hash", "c['graphSha256'] = 'ABC'" },

@@ -39,6 +39,8 @@ public static class Support
         foreach (var n in graph["nodes"]!.Select(x => (string)x!))
             if (!edges.Any(e => e[0] == n || e[1] == n)) lines.Add("node " + n);
         lines.AddRange(edges.Select(e => $"edge {e[0]} {e[1]} {e[2]}"));
+        if (graph["labels"] is JObject labels) // version 2: one measure line per label, sorted by node
+            lines.AddRange(labels.Properties().OrderBy(p => p.Name, StringComparer.Ordinal).Select(p => $"measure {p.Name} {p.Value}"));
         return string.Concat(lines.Select(l => l + "\n"));
     }
 
