@@ -29,7 +29,7 @@ public static class CertificateWriter
         var g = r.Graph;
         string N(int v) => Quote(g.Names[v]);
         string List(IEnumerable<int> nodes) => "[" + string.Join(", ", nodes.Select(N)) + "]";
-        string Vector(NodeVector v) => "{" + string.Join(", ", v.Entries.Select(e => $"{N(e.Node)}: {Quote(e.Value)}")) + "}";
+        string Vector(NodeVector v) => "{" + string.Join(", ", v.Entries.Select(e => $"{N(e.Node)}: {Quote(e.Value.ToString())}")) + "}";
         static string Block(IEnumerable<string> lines, string indent, char open, char close)
         {
             var items = lines.ToList();

@@ -59,7 +59,7 @@ public static class DotPicture
                 foreach (var (u, value) in vector.Entries)
                 {
                     s.Append($"  {id[v]} -> {id[u]} [color=\"{CorrectionColour}\", fontcolor=\"{CorrectionColour}\", constraint=false");
-                    if (value != "1") s.Append(", label=").Append(DotWriter.Id(value));
+                    if (!value.IsOne) s.Append(", label=").Append(DotWriter.Id(value.ToString()));
                     s.Append("];\n");
                 }
         return s.Append("}\n").ToString();
