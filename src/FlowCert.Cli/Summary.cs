@@ -19,7 +19,7 @@ public static class Summary
             return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
         }
         o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
-        o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
+        o.WriteLine($"field     {r.Field.Name}    flow: {FlowKinds.Name(r.Kind)}");
         if (g.HasLabels)
             o.WriteLine("labels    " + string.Join(", ", MeasurementLabels.All.Skip(1)
                 .Select(l => (l, n: g.Labels.Values.Count(x => x == l))).Where(t => t.n > 0).Select(t => $"{t.n} {MeasurementLabels.Name(t.l)}")) + ", the rest XY");

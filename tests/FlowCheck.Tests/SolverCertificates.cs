@@ -54,7 +54,7 @@ public static class SolverCertificates
             text += string.Join("\n", byNode) + "\n";
             graph = SolverReader.Parse(text, "g.ograph");
             foreach (var kind in planes ? new[] { FlowKind.General, FlowKind.Pauli } : [FlowKind.Pauli])
-                yield return new Produced($"labelled{seed}-{i}.{CertificateWriter.KindName(kind)}", text,
+                yield return new Produced($"labelled{seed}-{i}.{FlowKinds.Name(kind)}", text,
                     CertificateWriter.Write(FlowSolver.Solve(graph, FieldSpec.PrimeField(2), kind)));
         }
     }
@@ -85,7 +85,7 @@ public static class SolverCertificates
                 FlowResult result;
                 try { result = FlowSolver.Solve(graph, field, kind); }
                 catch (WeightNotInFieldException) { continue; }
-                yield return new Produced($"{name}.{field.Name}.{CertificateWriter.KindName(kind)}", text, CertificateWriter.Write(result));
+                yield return new Produced($"{name}.{field.Name}.{FlowKinds.Name(kind)}", text, CertificateWriter.Write(result));
             }
     }
 }

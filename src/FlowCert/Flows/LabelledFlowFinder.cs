@@ -38,7 +38,7 @@ internal static class LabelledFlowFinder
                 var p = new LabelledSystem(adjacency, graph, inU, unprocessed, v).Solve();
                 if (p is null) continue;
                 layer.Add(v);
-                corrections[v] = LayeredSearch.ToNodeVector(g.Field, p, p.Select(_ => g.Field.One).ToArray());
+                corrections[v] = LayeredSearch.ToNodeVector(g, p, p.Select(_ => g.Field.One).ToArray());
             }
             if (layer.Count == 0)
             {
