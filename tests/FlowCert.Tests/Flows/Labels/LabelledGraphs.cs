@@ -38,22 +38,22 @@ public static class LabelledGraphs
     /// Paths from inputs to outputs covering the nodes plus random edges (flows are common there), with at
     /// most 6 measured nodes when <paramref name="nodes"/> is at most 8, labelled as <see cref="Make"/> does.
     /// </summary>
-    public static OpenGraph MakeWithChains(Random rng, int nodes, MeasurementLabel[] labels)
+    public static OpenGraph MakeWithChains(Random rng, int nodes, MeasurementLabel[] labels, double xyShare = 0.4)
     {
         int chains = Math.Min(nodes, rng.Next(2, 4));
         var g = Validation.RandomGraphs.MakeWithChains(rng, nodes, chains, 0.35 * rng.NextDouble(), Validation.RandomGraphs.IntegerWeights);
-        return WithRandomLabels(rng, g, labels);
+        return WithRandomLabels(rng, g, labels, xyShare);
     }
 
     /// <summary>Labels from <paramref name="labels"/> on the measured nodes, at least one not XY.</summary>
-    public static OpenGraph WithRandomLabels(Random rng, OpenGraph g, MeasurementLabel[] labels)
+    public static OpenGraph WithRandomLabels(Random rng, OpenGraph g, MeasurementLabel[] labels, double xyShare = 0.4)
     {
         var measured = g.Measured;
         if (measured.Length == 0) return g;
         var chosen = new Dictionary<int, MeasurementLabel>();
         // XY often (and mostly on inputs, which can never be corrected when measured in XZ, YZ or Z)
         foreach (var v in measured)
-            chosen[v] = rng.NextDouble() < (g.Inputs.Contains(v) ? 0.8 : 0.4) ? MeasurementLabel.XY : labels[rng.Next(labels.Length)];
+            chosen[v] = rng.NextDouble() < (g.Inputs.Contains(v) ? 0.8 : xyShare) ? MeasurementLabel.XY : labels[rng.Next(labels.Length)];
         if (chosen.Values.All(l => l == MeasurementLabel.XY))
             chosen[measured[rng.Next(measured.Length)]] = labels.Where(l => l != MeasurementLabel.XY).ElementAt(rng.Next(labels.Length - 1));
         return g.WithLabels(chosen);
