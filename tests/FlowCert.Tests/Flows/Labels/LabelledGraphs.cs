@@ -58,4 +58,33 @@ public static class LabelledGraphs
             chosen[measured[rng.Next(measured.Length)]] = labels.Where(l => l != MeasurementLabel.XY).ElementAt(rng.Next(labels.Length - 1));
         return g.WithLabels(chosen);
     }
+
+    /// <summary>Chains (as <see cref="MakeWithChains"/>) with 1 to 3 labels other than XY from
+    /// <paramref name="labels"/>: each either on a measured non-input or on a new leaf ("gadget") attached to
+    /// a random node, the rest XY. Flows stay common while labels are exercised.</summary>
+    public static OpenGraph ChainsWithFewLabels(Random rng, int nodes, MeasurementLabel[] labels)
+    {
+        int chains = Math.Min(nodes, rng.Next(1, 4));
+        var g = Validation.RandomGraphs.MakeWithChains(rng, nodes, chains, 0.12 * rng.NextDouble(), ["1", "-1", "3"]);
+        var nonXy = labels.Where(l => l != MeasurementLabel.XY).ToArray();
+        var names = g.Names.ToList();
+        var edges = g.Edges.Select(e => (g.Names[e.U], g.Names[e.V], e.Weight)).ToList();
+        var chosen = new Dictionary<string, MeasurementLabel>();
+        int count = rng.Next(1, 4);
+        for (int k = 0; k < count; k++)
+        {
+            var label = nonXy[rng.Next(nonXy.Length)];
+            var candidates = g.Measured.Where(v => !g.Inputs.Contains(v)).Select(v => g.Names[v]).ToArray();
+            if (rng.Next(2) == 0 || candidates.Length == 0)
+            {
+                var leaf = "g" + k;
+                edges.Add((leaf, names[rng.Next(names.Count)], Rational.One));
+                names.Add(leaf);
+                chosen[leaf] = label;
+            }
+            else chosen[candidates[rng.Next(candidates.Length)]] = label;
+        }
+        var grown = new OpenGraph(names, edges, g.Inputs.Select(v => g.Names[v]), g.Outputs.Select(v => g.Names[v]));
+        return grown.WithLabels(chosen.ToDictionary(kv => grown.IndexOf(kv.Key), kv => kv.Value));
+    }
 }
