@@ -12,6 +12,7 @@ internal static class FlowConditionCheck
     public static IReadOnlyList<string> Violations<T, TField>(CorrectionSystem<T, TField> s)
         where T : struct where TField : struct, IField<T>
     {
+        if (s.Graph.Graph.HasLabels) return LabelledConditionCheck.Violations(s);
         var f = s.Graph.Field;
         var g = s.Graph.Graph;
         var problems = new List<string>();

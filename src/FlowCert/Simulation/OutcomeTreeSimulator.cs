@@ -60,8 +60,12 @@ public static class OutcomeTreeSimulator
             IEnumerable<int> outcomes = sample is null ? Enumerable.Range(0, p) : sample.Select(s => s[level]).Distinct().Order();
             foreach (var raw in outcomes)
             {
-                var child = register.Project(v, QuditOperators.OutcomeBra(adapted, raw));
-                int m = Mod(Faults.HasFlag(FrameFault.FlipReadout) ? raw + B[v] : raw - B[v]);
+                // A labelled qubit (flows.md section 9) is measured in its basis seen through its frame; outcome read as is.
+                bool labelled = P.Graph.HasLabels;
+                var child = register.Project(v, labelled
+                    ? LabelledBasis.FramedBra(P.Graph.Label(v), P.Angles[v], Faults.HasFlag(FrameFault.SkipAngleAdaptation) ? 0 : A[v], B[v], raw)
+                    : QuditOperators.OutcomeBra(adapted, raw));
+                int m = labelled ? raw : Mod(Faults.HasFlag(FrameFault.FlipReadout) ? raw + B[v] : raw - B[v]);
                 int sign = Faults.HasFlag(FrameFault.FlipCorrectionSign) ? -1 : 1;
                 var next = this with { A = (int[])A.Clone(), B = (int[])B.Clone(), Raw = (int[])Raw.Clone(), Outcome = (int[])Outcome.Clone(), UsedA = (int[])UsedA.Clone(), UsedB = (int[])UsedB.Clone() };
                 next.Raw[v] = raw; next.Outcome[v] = m; next.UsedA[v] = A[v]; next.UsedB[v] = B[v];
