@@ -32,6 +32,8 @@ public static class DotPicture
             if (DotWriter.NodeShape(g, v) is { } shape) attributes.Add(shape);
             if (blocked.Contains(v)) attributes.Add($"fillcolor=\"{BlockedFill}\", color=\"{BlockedStroke}\", penwidth=2.5");
             else if (g.Outputs.Contains(v)) attributes.Add($"fillcolor=\"{OutputFill}\", color=\"{OutputStroke}\"");
+            if (g.HasLabels && !g.Outputs.Contains(v))
+                attributes.Add("label=" + DotWriter.Id(g.Names[v])[..^1] + "\\n" + Graphs.MeasurementLabels.Name(g.Label(v)) + "\"");
             s.Append("  ").Append(id[v]);
             if (attributes.Count > 0) s.Append(" [").Append(string.Join(", ", attributes)).Append(']');
             s.Append(";\n");

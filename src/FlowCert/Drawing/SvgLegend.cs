@@ -38,9 +38,13 @@ internal static class SvgLegend
         if (r?.Obstruction is { } b)
         {
             lines.Add(new(Glyph.Blocked, $"blocked set ({Count(b.Nodes.Count, "node")}): none of them can be corrected from outside it, so no {KindText(r.Kind)} flow over {r.Field.Name} exists"));
-            if (r.Kind == FlowKind.General)
+            if (b.NodeWitnesses is { } perNode)
+                lines.Add(new(Glyph.None, $"the certificate proves it with {Count(perNode.Count, "witness")}, one per blocked node"));
+            else if (r.Kind == FlowKind.General)
                 lines.Add(new(Glyph.None, $"the certificate proves it with {Count(b.Witnesses.Count, "left-kernel witness vector")}"));
         }
+        if (g.HasLabels)
+            lines.Add(new(Glyph.None, "letters in a measured node: its measurement label (XY, XZ, YZ planes; X, Y, Z Pauli axes)"));
         if (p.Arrangement == PictureArrangement.PositionHints) lines.Add(new(Glyph.None, "layout: the position hints (at lines) of the graph file"));
         if (p.Arrangement == PictureArrangement.DistanceFromInputs) lines.Add(new(Glyph.None, "columns: distance from the nearest input (nodes no input reaches come after)"));
         if (!p.ShowLabels)

@@ -1,3 +1,4 @@
+using FlowCert.Graphs;
 using System.Text;
 using FlowCert.Flows;
 using static FlowCert.Drawing.SvgText;
@@ -92,6 +93,13 @@ public static class SvgPicture
             s.Append($"<circle cx=\"{F(p.X[v])}\" cy=\"{F(p.Y[v])}\" r=\"{F(Radius)}\" fill=\"{fill}\" stroke=\"{stroke}\"{extra}/>\n");
         }
         s.Append("</g>\n");
+        if (g.HasLabels)
+        {
+            s.Append($"<g id=\"measurement-labels\" font-size=\"9\" font-weight=\"bold\" fill=\"{TextColour}\" text-anchor=\"middle\">\n");
+            foreach (var v in g.Measured)
+                s.Append($"<text x=\"{F(p.X[v])}\" y=\"{F(p.Y[v] + 3)}\">{MeasurementLabels.Name(g.Label(v))}</text>\n");
+            s.Append("</g>\n");
+        }
         if (p.ShowLabels)
         {
             s.Append($"<g id=\"names\" font-size=\"10\" fill=\"{TextColour}\" text-anchor=\"middle\" stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">\n");

@@ -37,7 +37,12 @@ public static class ScheduleText
         Line($"feed-forward schedule: field {s.Field.Name}, {FlowKinds.Name(s.Kind)} flow, depth {st.Depth}; " +
              $"{g.NodeCount} nodes: {g.Inputs.Count} input(s), {g.Outputs.Count} output(s), {g.NodeCount - g.Outputs.Count} measured");
         if (s.VanishedEdges.Count > 0) Line("warning: " + VanishingEdges.Warning(g, s.Field, s.VanishedEdges));
-        Line($"m_v = outcome of v re-read through its frame (raw outcome - b_v); all arithmetic exact, in {s.Field.Name}");
+        if (g.HasLabels)
+        {
+            Line($"measurement labels (flows.md section 9): {string.Join(" ", g.Labels.OrderBy(kv => kv.Key).Select(kv => $"{g.Names[kv.Key]}={MeasurementLabels.Name(kv.Value)}"))}; the rest XY");
+            Line($"m_v = outcome of v measured in the basis of its label seen through its frame (below); all arithmetic exact, in {s.Field.Name}");
+        }
+        else Line($"m_v = outcome of v re-read through its frame (raw outcome - b_v); all arithmetic exact, in {s.Field.Name}");
         Line();
         Line("rounds (round 1 is measured first; nodes of one round in parallel)");
         Table(o, ["round", "nodes"], s.Rounds.Select((r, k) => new[] { (k + 1).ToString(), string.Join(" ", r.Select(v => g.Names[v])) }));
@@ -45,8 +50,16 @@ public static class ScheduleText
         Line("corrections triggered by outcome m_v: X_u^(x*m_v) Z_u^(z*m_v) on node u, or add -x*m_v, -z*m_v to u's frame");
         Table(o, ["outcome", "node", "x", "z"], s.Corrections.Select(c => new[] { "m_" + g.Names[c.Source], g.Names[c.Target], c.X.ToString(), c.Z.ToString() }));
         Line();
-        Line("frames: node w holds X^a Z^b on its ideal state. Measure w with D' = X^a D X^-a (entry j of D' is entry j-a of D)");
-        Line("and read m_w = raw - b; after the last round apply (X^a Z^b)^-1 to each output.");
+        if (g.HasLabels)
+        {
+            Line("frames: node w holds X^a Z^b on its ideal state. Measure w in the basis X^a Z^b |psi_k> (|psi_k> the basis of its");
+            Line("label and angle) and read m_w = k; after the last round apply (X^a Z^b)^-1 to each output.");
+        }
+        else
+        {
+            Line("frames: node w holds X^a Z^b on its ideal state. Measure w with D' = X^a D X^-a (entry j of D' is entry j-a of D)");
+            Line("and read m_w = raw - b; after the last round apply (X^a Z^b)^-1 to each output.");
+        }
         Table(o, ["node", "when", "a (angle, X)", "b (outcome, Z)"], s.Frames.Select(fr => new[] { g.Names[fr.Node], When(fr), Form(fr.X, g.Names), Form(fr.Z, g.Names) }));
         Line();
         Line("statistics");
