@@ -30,7 +30,7 @@ public static class DemoCommand
             foreach (var field in design.Fields)
             {
                 FlowResult[] results;
-                try { results = DemoScenario.Kinds.Select(k => FlowSolver.Solve(g, field, k)).ToArray(); }
+                try { results = design.Kinds.Select(k => FlowSolver.Solve(g, field, k)).ToArray(); }
                 catch (WeightNotInFieldException e) { o.WriteLine($"  {field.Name,-3} not defined: {e.Message}"); continue; }
                 var cells = new List<string>();
                 foreach (var r in results)

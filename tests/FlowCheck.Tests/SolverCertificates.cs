@@ -18,12 +18,12 @@ public static class SolverCertificates
     static readonly string[] WeightPool = ["1", "1", "1", "-1", "2", "1/2", "-1/2", "3", "2/3", "0.5", "-4", "5", "6/5"];
 
     public static IEnumerable<Produced> Demo() =>
-        DemoScenario.Designs().SelectMany(d => Solve(d.Name, d.Text, d.Fields));
+        DemoScenario.Designs().SelectMany(d => Solve(d.Name, d.Text, d.Fields, d.Kinds));
 
     /// <summary>The demo designs over F_p for the Mersenne prime p = 2^61 - 1 (common practice), near the
     /// solver's limit of 2^62: residues far beyond 64-bit products.</summary>
     public static IEnumerable<Produced> DemoOverLargePrime() =>
-        DemoScenario.Designs().SelectMany(d => Solve(d.Name, d.Text, [FieldSpec.PrimeField((1UL << 61) - 1)]));
+        DemoScenario.Designs().Where(d => !d.Graph.HasLabels).SelectMany(d => Solve(d.Name, d.Text, [FieldSpec.PrimeField((1UL << 61) - 1)]));
 
     /// <summary>Random graphs of 2 to 8 nodes (names with every allowed punctuation, decimal weights,
     /// comments and `at` lines in the text), each solved over every field with both kinds.</summary>
@@ -76,11 +76,11 @@ public static class SolverCertificates
         return string.Join("\n", text) + "\n";
     }
 
-    static IEnumerable<Produced> Solve(string name, string text, IEnumerable<FieldSpec> fields)
+    static IEnumerable<Produced> Solve(string name, string text, IEnumerable<FieldSpec> fields, IEnumerable<FlowKind>? kinds = null)
     {
         var graph = SolverReader.Parse(text, name + ".ograph");
         foreach (var field in fields)
-            foreach (var kind in DemoScenario.Kinds)
+            foreach (var kind in kinds ?? DemoScenario.Kinds)
             {
                 FlowResult result;
                 try { result = FlowSolver.Solve(graph, field, kind); }

@@ -8,6 +8,9 @@ namespace FlowCert.Demo;
 /// <summary>One design of the built-in demo and the analyses run on it.</summary>
 public sealed record DemoDesign(string Name, string Text, IReadOnlyList<FieldSpec> Fields)
 {
+    /// <summary>The flow kinds the design is analysed for (generalized and causal unless it has measurement labels).</summary>
+    public IReadOnlyList<FlowKind> Kinds { get; init; } = DemoScenario.Kinds;
+
     /// <summary>The design parsed as an open graph (parsed anew on every access).</summary>
     public OpenGraph Graph => OgraphReader.Parse(Text, Name + ".ograph");
 }
@@ -15,7 +18,8 @@ public sealed record DemoDesign(string Name, string Text, IReadOnlyList<FieldSpe
 /// <summary>
 /// The built-in demo: the fictional Merrow Reach lab's designs (a continuous-variable wire, a qutrit
 /// patch, a splitter whose flow depends on the field, and a merge that has no flow), each analysed
-/// over Q and small primes with both kinds of flow.
+/// over Q and small primes with both kinds of flow; and two qubit designs with measurement labels
+/// (one with planes, one whose Pauli flow has no generalized counterpart), analysed over F2.
 /// </summary>
 public static class DemoScenario
 {
@@ -32,6 +36,9 @@ public static class DemoScenario
             new("qutrit-patch", Resource("qutrit-patch"), all),
             new("splitter-pair", Resource("splitter-pair"), all),
             new("merge-attempt", Resource("merge-attempt"), all),
+            // Qubit designs with measurement labels (flows.md section 9): over F2 only.
+            new("plane-relay", Resource("plane-relay"), [FieldSpec.PrimeField(2)]) { Kinds = [FlowKind.General, FlowKind.Pauli] },
+            new("pauli-arm", Resource("pauli-arm"), [FieldSpec.PrimeField(2)]) { Kinds = [FlowKind.Pauli] },
         ];
     }
 

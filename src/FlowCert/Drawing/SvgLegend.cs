@@ -44,7 +44,7 @@ internal static class SvgLegend
                 lines.Add(new(Glyph.None, $"the certificate proves it with {Count(b.Witnesses.Count, "left-kernel witness vector")}"));
         }
         if (g.HasLabels)
-            lines.Add(new(Glyph.None, "letters in a measured node: its measurement label (XY, XZ, YZ planes; X, Y, Z Pauli axes)"));
+            lines.Add(new(Glyph.None, "letters in a measured node: its measurement label (XY, XZ, YZ planes; X, Y, Z Pauli axes); an orange ring: the node is in its own correction set"));
         if (p.Arrangement == PictureArrangement.PositionHints) lines.Add(new(Glyph.None, "layout: the position hints (at lines) of the graph file"));
         if (p.Arrangement == PictureArrangement.DistanceFromInputs) lines.Add(new(Glyph.None, "columns: distance from the nearest input (nodes no input reaches come after)"));
         if (!p.ShowLabels)

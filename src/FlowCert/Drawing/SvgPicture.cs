@@ -119,6 +119,11 @@ public static class SvgPicture
         foreach (var (v, vector) in result.Corrections.OrderBy(kv => kv.Key))
             foreach (var (u, value) in vector.Entries)
             {
+                if (u == v) // a labelled node in its own correction set (flows.md section 9): a ring, not an arrow
+                {
+                    s.Append($"<circle cx=\"{F(p.X[v])}\" cy=\"{F(p.Y[v])}\" r=\"{F(Radius + 4)}\" marker-end=\"none\"/>\n");
+                    continue;
+                }
                 var (path, lx, ly) = CurvedArrow(p.X[v], p.Y[v], p.X[u], p.Y[u]);
                 s.Append($"<path d=\"{path}\"/>\n");
                 if (p.ShowLabels && !value.IsOne)

@@ -20,6 +20,15 @@ public class DemoCommandTests
         {
             var design = Path.GetFileNameWithoutExtension(file);
             var g = OgraphReader.ReadFile(w.PathOf($"{folder}/{file}"));
+            if (g.HasLabels)
+            {
+                // Qubit designs with measurement labels (flows.md section 9): F2 only; Pauli flow, and
+                // generalized flow too when every label is a plane (docs/formats.md).
+                bool planes = g.Labels.Values.All(MeasurementLabels.IsPlane);
+                if (planes) expected.Add($"{folder}/{design}.F2.general.json");
+                expected.Add($"{folder}/{design}.F2.pauli.json");
+                continue;
+            }
             foreach (var field in Fields)
             {
                 bool defined = field == "Q" || g.Edges.All(e => e.Weight.Denominator % ulong.Parse(field[1..]) != 0);
@@ -39,7 +48,7 @@ public class DemoCommandTests
         Assert.Contains("Merrow Reach", run.Stdout);
 
         var graphs = Directory.GetFiles(w.PathOf("demo"), "*.ograph").Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray();
-        Assert.Equal(["loop-wire.ograph", "merge-attempt.ograph", "qutrit-patch.ograph", "splitter-pair.ograph"], graphs.Select(n => n!).ToArray());
+        Assert.Equal(["loop-wire.ograph", "merge-attempt.ograph", "pauli-arm.ograph", "plane-relay.ograph", "qutrit-patch.ograph", "splitter-pair.ograph"], graphs.Select(n => n!).ToArray());
         var certificates = ExpectedCertificates(w, "demo", graphs!);
         w.AssertExactly(["demo/", .. graphs.Select(g => "demo/" + g), .. certificates]);
         Assert.Contains($"{certificates.Count} certificates written", run.Stdout);
