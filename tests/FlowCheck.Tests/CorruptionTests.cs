@@ -25,6 +25,7 @@ public class CorruptionTests(ITestOutputHelper output)
     static List<(string Name, JObject Cert)> Seeds() =>
         Examples.AllValid()
             .Concat(SolverCertificates.Demo().Concat(SolverCertificates.Random(graphs: 25, seed: 7))
+                .Where(p => !p.Json.Contains("\"version\": 2")) // version 2 has its own corruption test (LabelledTests)
                 .Select(p => (p.Name, JObject.Parse(p.Json))))
             .ToList();
 
