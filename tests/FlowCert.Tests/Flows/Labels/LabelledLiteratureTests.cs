@@ -114,6 +114,27 @@ public sealed class LabelledLiteratureTests
         Assert.Equal(1 << pauliNodes.Length, choices);
     }
 
+    /// <summary>The demo's pauli-arm design is one of these graphs (its comment says so): a Pauli flow of depth 2
+    /// and no generalized flow with its X node in the XY or the XZ plane (same sources as above).</summary>
+    [Fact]
+    public void TheDemoPauliArmHasAPauliFlowButNoGeneralizedFlow()
+    {
+        var g = FlowCert.Demo.DemoScenario.Designs().Single(d => d.Name == "pauli-arm").Graph;
+        var pauli = FlowSolver.Solve(g, F2, FlowKind.Pauli);
+        Assert.True(pauli.HasFlow && pauli.Depth == 2);
+        var arm = g.Labels.Single().Key;
+        foreach (var plane in new[] { MeasurementLabel.XY, MeasurementLabel.XZ })
+        {
+            var planar = g.WithLabels(new Dictionary<int, MeasurementLabel> { [arm] = plane });
+            Assert.False(FlowSolver.Solve(planar, F2, FlowKind.General).HasFlow);
+            Assert.Null(LabelledBruteForce.MinimumDepth(LabelledReference.From(planar), pauli: false));
+        }
+        var relay = FlowCert.Demo.DemoScenario.Designs().Single(d => d.Name == "plane-relay").Graph;
+        var general = FlowSolver.Solve(relay, F2, FlowKind.General);
+        Assert.True(general.HasFlow);
+        Assert.Equal(LabelledBruteForce.MinimumDepth(LabelledReference.From(relay), pauli: false), general.Depth);
+    }
+
     private static IEnumerable<MeasurementLabel[]> Choices(MeasurementLabel[][] options)
     {
         if (options.Length == 0) { yield return []; yield break; }
