@@ -33,7 +33,7 @@ public static class CliApp
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {
-            foreach (var e in parsed.Errors) stderr.WriteLine($"flowcert: {e.Message}");
+            foreach (var e in parsed.Errors) stderr.WriteLine($"flowcert: {Escaped.Of(e.Message)}");
             stderr.WriteLine("Run 'flowcert --help' for usage.");
             return ExitCode.BadInput;
         }
@@ -45,12 +45,12 @@ public static class CliApp
         catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException
             or GraphFileException or FamilyParameterException or CertificateFormatException)
         {
-            stderr.WriteLine($"flowcert: {e.Message}");
+            stderr.WriteLine($"flowcert: {Escaped.Of(e.Message)}");
             return ExitCode.BadInput;
         }
         catch (Exception e) when (e is FileNotFoundException or DirectoryNotFoundException or UnauthorizedAccessException or IOException)
         {
-            stderr.WriteLine($"flowcert: {e.Message}");
+            stderr.WriteLine($"flowcert: {Escaped.Of(e.Message)}");
             return ExitCode.BadInput;
         }
         catch (Exception e)

@@ -41,7 +41,7 @@ public static class DrawCommand
             ? SvgPicture.Write(PictureLayout.Arrange(g, result, title))
             : DotPicture.Write(g, result, title);
         SafeFile.WriteAllText(outPath, text, certPath is null ? [graphPath] : [graphPath, certPath]);
-        stdout.WriteLine($"wrote {outPath}");
+        stdout.WriteLine($"wrote {Escaped.Of(outPath)}");
         return ExitCode.Flow;
     }
 }
