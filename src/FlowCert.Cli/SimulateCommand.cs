@@ -35,18 +35,18 @@ public static class SimulateCommand
     {
         var selection = ParseBranches(branchText, seed);
         ulong? dim = dimText is null ? null : ParseDimension(dimText);
-        var graph = GraphFiles.Read(graphPath, inputs, outputs);
+        var graph = GraphInput.Read(graphPath, inputs, outputs);
         var result = ScheduleCommand.Read(certPath);
         if (CanonicalForm.Sha256(graph) != CanonicalForm.Sha256(result.Graph))
             throw new UserInputException($"{graphPath} and {certPath} describe different graphs (canonical SHA-256 {CanonicalForm.Sha256(graph)[..12]}... and {CanonicalForm.Sha256(result.Graph)[..12]}...)");
         var vanished = VanishingEdges.In(result.Graph, result.Field);
-        if (vanished.Count > 0) stderr.WriteLine($"flowcert: warning: {Escaped.Of(certPath)}: {VanishingEdges.Warning(result.Graph, result.Field, vanished)}");
+        if (vanished.Count > 0) Terminal.Warn($"{certPath}: {VanishingEdges.Warning(result.Graph, result.Field, vanished)}", stderr);
         QuditPattern pattern;
         DeterminismReport report;
         try
         {
             pattern = QuditPattern.FromFlow(result, dim, seed);
-            foreach (var problem in pattern.Violations) stderr.WriteLine($"flowcert: warning: {Escaped.Of(certPath)}: {problem}");
+            foreach (var problem in pattern.Violations) Terminal.Warn($"{certPath}: {problem}", stderr);
             report = OutcomeTreeSimulator.Run(pattern, selection);
         }
         catch (Exception e) when (e is SimulationException or ScheduleException) { throw new UserInputException($"{certPath}: {e.Message}"); }
@@ -70,6 +70,8 @@ public static class SimulateCommand
         if (text == "all") return OutcomeBranches.All;
         if (text.Length == 0 || !text.All(char.IsAsciiDigit))
             throw new UserInputException($"'{text}' is not a branch selection: write all, or a number K of random branches.");
+        if (text.All(c => c == '0'))
+            throw new UserInputException("--branches 0 would look at no outcome and prove nothing: write all, or a number K of at least 1.");
         if (!int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var k) || k > OutcomeBranches.MaxExhaustive)
             throw new UserInputException($"--branches {text} is too many: sample at most {OutcomeBranches.MaxExhaustive} branches (2^20, the most 'all' enumerates).");
         return OutcomeBranches.Sample(k, seed);

@@ -21,7 +21,7 @@ public static class Summary
         o.WriteLine($"graph     {Escaped.Of(source)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
         o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
         if (r.VanishedEdges.Count > 0)
-            o.WriteLine("warning   " + VanishingEdges.Warning(g, r.Field, r.VanishedEdges));
+            Terminal.Warn($"{source}: {VanishingEdges.Warning(g, r.Field, r.VanishedEdges)}");
         if (r.Obstruction is { } blocked)
         {
             o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");
