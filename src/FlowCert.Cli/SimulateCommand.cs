@@ -80,7 +80,7 @@ public static class SimulateCommand
         static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;
         o.WriteLine($"pattern      {graphPath} with {certPath}: {field}, {r.MeasuredNodes} measured node(s), {g.Outputs.Count} output(s)");
-        o.WriteLine($"state        dimension {r.Dimension}: {r.Qudits} qudits + {r.ReferenceQudits} reference = {r.Amplitudes} amplitudes");
+        o.WriteLine($"state        dimension {r.Dimension}: {r.Qudits} qudits, at most {r.PeakLive} live at once + {r.ReferenceQudits} reference = {r.Amplitudes} amplitudes at the peak");
         o.WriteLine($"randomness   seed {seed}: a random diagonal unitary D per measured node, one random input state");
         o.WriteLine(r.Exhaustive
             ? $"branches     {r.BranchesCompared} of {r.TotalBranches:0} (every outcome string)"
