@@ -86,8 +86,8 @@ public class PrimeSurveyRandomTests(ITestOutputHelper output)
         Assert.Equal(330 * (62 + 10), t.Compared);
         // The sample exercises what the survey is for: answers that differ from Q, some at primes that divide
         // no weight (only the layer invariants, parts (b) and (c), can catch those), and undefined weights.
-        Assert.True(t.Differing >= 30, $"only {t.Differing} differing answers");
-        Assert.True(t.DifferingAwayFromWeights >= 3, $"only {t.DifferingAwayFromWeights} differing answers away from the weights' primes");
+        Assert.True(t.Differing >= 20, $"only {t.Differing} differing answers");
+        Assert.True(t.DifferingAwayFromWeights >= 5, $"only {t.DifferingAwayFromWeights} differing answers away from the weights' primes");
         Assert.True(t.Undefined > 0);
     }
 
