@@ -68,7 +68,7 @@ public static class PrimesCommand
 
     /// <summary>The file name of one certificate: <c>STEM.FIELD.KIND.json</c>, as the demo names them.</summary>
     public static string CertificateName(string graphPath, string field, FlowKind kind)
-        => $"{Path.GetFileNameWithoutExtension(graphPath)}.{field}.{CertificateWriter.KindName(kind)}.json";
+        => $"{Path.GetFileNameWithoutExtension(graphPath)}.{field}.{FlowKinds.Name(kind)}.json";
 
     // Like `demo --out-dir`: the folder is created if absent; a regular file of the same name is replaced
     // (asked for by naming the folder), anything else is refused by SafeFile, and the graph is never written over.

@@ -25,11 +25,11 @@ public static class PrimesReport
         var g = s.Graph;
         var q = s.Rational;
         o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs");
-        o.WriteLine($"flow      {CertificateWriter.KindName(s.Kind)}");
+        o.WriteLine($"flow      {FlowKinds.Name(s.Kind)}");
         o.WriteLine($"over Q    {Verdict(q)}");
         var origins = s.Kind == FlowKind.Causal ? "weight numerators and denominators (causal flow depends only on which weights vanish)"
             : "weights and the Q run's layer blocks";
-        o.WriteLine($"E         {s.Integers.Count} integer(s) from {origins}; exceptional candidates: {(s.Exceptional.Count == 0 ? "none" : string.Join(" ", s.Exceptional.Select(a => a.Prime)))}");
+        o.WriteLine($"E         {(s.Exceptional.Count == 0 ? "none" : string.Join(" ", s.Exceptional.Select(a => a.Prime)))}: the prime factors of {s.Integers.Count} integer(s) from {origins}");
         if (s.Exceptional.Count > 0)
         {
             o.WriteLine();
@@ -84,7 +84,7 @@ public static class PrimesReport
         w.WriteStartObject();
         w.WritePropertyName("graph"); w.WriteValue(source);
         w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(g));
-        w.WritePropertyName("flow"); w.WriteValue(CertificateWriter.KindName(s.Kind));
+        w.WritePropertyName("flow"); w.WriteValue(FlowKinds.Name(s.Kind));
         w.WritePropertyName("rational"); Answer(w, g, s.Rational);
         w.WritePropertyName("exceptional");
         w.WriteStartArray();

@@ -33,7 +33,7 @@ public class PrimesCommandTests
         Assert.True(run.ExitCode == 0, run.ToString());
         Assert.Equal("", run.Stderr);
         Assert.Contains("over Q    flow, depth 3", run.Stdout);
-        Assert.Contains("exceptional candidates: 2 3", run.Stdout);
+        Assert.Contains("E         2 3: the prime factors of", run.Stdout);
         Assert.Matches(@"\n  2 +no flow \(blocked \d+ nodes?\) +DIFFERS +vanish: b-c \(2\)", run.Stdout);
         Assert.Matches(@"\n  3 +undefined at 3 ", run.Stdout);
         Assert.Single(System.Text.RegularExpressions.Regex.Matches(run.Stdout, "every other prime: same verdict and depth as over Q"));
@@ -161,6 +161,25 @@ public class PrimesCommandTests
     }
 
     [Fact]
+    public void TheDemoSurveysTheQutritPatchOverEveryPrime()
+    {
+        // The scene's claims, checked against direct solves of the same design: at p = 2 the weight-2 edges
+        // vanish and the flow is lost, at p = 3 the weight-3 edge vanishes but depth 3 remains, as over Q.
+        using var w = new Workspace();
+        var run = Flowcert.InProcess("demo", "--out-dir", w.PathOf("demo"));
+        Assert.True(run.ExitCode == 0, run.ToString());
+        var scene = run.Stdout[run.Stdout.IndexOf("Choosing a prime dimension", StringComparison.Ordinal)..];
+        Assert.Contains("qutrit-patch.ograph", scene);
+        Assert.Contains("every other prime: same verdict and depth as over Q: flow, depth 3", scene);
+        var graph = w.PathOf("demo/qutrit-patch.ograph");
+        Assert.Equal(0, Flowcert.InProcess("solve", graph).ExitCode);
+        Assert.Equal(1, Flowcert.InProcess("solve", graph, "--field", "2").ExitCode);
+        Assert.Contains("flow of minimum depth 3", Flowcert.InProcess("solve", graph, "--field", "3").Stdout);
+        Assert.Matches(@"\n  2 +no flow \(blocked 3 nodes\) +DIFFERS", scene);
+        Assert.Matches(@"\n  3 +flow, depth 3 +same", scene);
+    }
+
+    [Fact]
     public void CausalSurveysSayTheirCandidatesAreTheWeightPrimes()
     {
         using var w = new Workspace();
@@ -168,7 +187,7 @@ public class PrimesCommandTests
         var run = Flowcert.InProcess("primes", graph, "--flow", "causal", "--check-up-to", "30");
         Assert.True(run.ExitCode == 0, run.ToString());
         Assert.Contains("causal flow depends only on which weights vanish", run.Stdout);
-        Assert.Contains("exceptional candidates: 2 3", run.Stdout);
+        Assert.Contains("E         2 3: the prime factors of", run.Stdout);
         Assert.Contains("all agree with the claim", run.Stdout);
     }
 }

@@ -3,7 +3,7 @@ using System.Numerics;
 namespace FlowCert.Flows.Primes;
 
 /// <summary>
-/// Fraction-free Gaussian elimination (Bareiss, "Sylvester's identity and multistep integer-preserving
+/// Fraction-free Gaussian elimination (the Bareiss algorithm, published as "Sylvester's identity and multistep integer-preserving
 /// Gaussian elimination", Math. Comp. 22 (1968) 565-578, doi:10.2307/2004533) of an integer matrix B
 /// augmented by the identity, [B | I]. After the step with pivots (r_1, c_1) .. (r_k, c_k), every entry of a
 /// row i below them is the minor of [B | I] on rows r_1..r_k, i and columns c_1..c_k, j, so every division

@@ -13,8 +13,7 @@ namespace FlowCert.Flows.Primes;
 /// </summary>
 public sealed class PrimeSurvey
 {
-    /// <summary>The largest prime F_p arithmetic supports is below this (PrimeField: p &lt; 2^62).</summary>
-    public static readonly BigInteger FieldLimit = BigInteger.One << 62;
+    private static readonly BigInteger FieldLimit = PrimeField.Bound;
 
     /// <summary>The graph surveyed.</summary>
     public required OpenGraph Graph { get; init; }
