@@ -10,7 +10,7 @@ namespace FlowCert.Cli;
 /// <summary>The table and the JSON object printed by <c>flowcert primes</c>.</summary>
 public static class PrimesReport
 {
-    private const int MaxNodesShown = 8;
+    private const int MaxEdgesShown = 3;
 
     /// <summary>The sentence printed once for every prime outside E.</summary>
     public const string OtherPrimes = "every other prime: same verdict and depth as over Q";
@@ -41,13 +41,13 @@ public static class PrimesReport
                 {
                     answer = Verdict(r);
                     versus = SameAsQ(r, q) ? "same" : "DIFFERS";
-                    notes = r.VanishedEdges.Count > 0 ? $"vanish: {VanishingEdges.Describe(g, r.VanishedEdges)}" : "";
+                    notes = r.VanishedEdges.Count > 0 ? $"vanish: {Few(g, r.VanishedEdges)}" : "";
                 }
                 else
                 {
                     answer = $"undefined at {a.Prime}";
                     versus = "-";
-                    notes = $"denominator divisible by {a.Prime}: {VanishingEdges.Describe(g, a.UndefinedEdges)}";
+                    notes = $"denominator divisible by {a.Prime}: {Few(g, a.UndefinedEdges)}";
                 }
                 o.WriteLine($"  {a.Prime,-8} {answer,-34} {versus,-8} {notes}".TrimEnd());
             }
@@ -68,6 +68,11 @@ public static class PrimesReport
         }
         if (written.Count > 0) o.WriteLine($"certificates {written.Count} written: {string.Join(" ", written.Select(Path.GetFileName))} in {Path.GetDirectoryName(written[0])}");
     }
+
+    // A table cell: the first few edges as VanishingEdges writes them, then how many there are (--json lists all).
+    private static string Few(OpenGraph g, IReadOnlyList<WeightedEdge> edges)
+        => edges.Count <= MaxEdgesShown ? VanishingEdges.Describe(g, edges)
+            : $"{VanishingEdges.Describe(g, edges.Take(MaxEdgesShown).ToList())}, ... ({edges.Count} in all)";
 
     private static string Short(FlowResult r) => r.HasFlow ? $"flow, depth {r.Depth}" : "no flow";
 

@@ -153,4 +153,20 @@ public class PrimeSurveyHandCheckedTests
         Assert.Equal([2UL, 3], E(s));
         Assert.Equal(PrimeClaimKind.SameAsRationals, s.ClaimAt(5).Kind);
     }
+
+    [Fact]
+    public void PrimesBeyondTheFieldRangeAreReportedNotSolved()
+    {
+        // 4611686018427388039 is the first prime above 2^62 (python3-sympy's nextprime; coreutils factor
+        // agrees): prime, but beyond F_p arithmetic (p < 2^62), so it is listed as not classified. A 20-digit
+        // prime above 2^64 can only pass the probable-prime test: listed as such, never claimed.
+        const string above62 = "4611686018427388039", p20 = "30000000000000012347";
+        var s = Survey(Parse($"input a\noutput c\nedge a b {above62}\nedge b c 1/{p20}\n"));
+        Assert.Empty(s.Exceptional);
+        Assert.Equal([above62, p20], s.Unclassified.Select(u => u.Value.ToString()).ToArray());
+        Assert.Contains("2^62 or more", s.Unclassified[0].Reason);
+        Assert.Contains("probable prime", s.Unclassified[1].Reason);
+        Assert.False(s.IsComplete);
+        AuditBelow100(s);
+    }
 }
