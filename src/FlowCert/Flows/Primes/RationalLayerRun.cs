@@ -31,9 +31,18 @@ internal sealed class RationalLayerRun
         foreach (var o in g.Outputs) processed[o] = true;
         int unprocessed = n - g.Outputs.Count;
         bool IsCorrector(int v) => processed[v] && !g.Inputs.Contains(v);
+        // The frontier (unprocessed nodes next to a corrector) only grows when a node becomes a corrector,
+        // and a node leaves it only when it is processed: kept incrementally, so a step costs its block.
+        var frontier = new SortedSet<int>();
+        void Promote(int v)
+        {
+            if (g.Inputs.Contains(v)) return;
+            foreach (var (w, _) in adjacency[v]) if (!processed[w]) frontier.Add(w);
+        }
+        foreach (var o in g.Outputs.Order()) Promote(o);
         while (unprocessed > 0)
         {
-            var rows = Enumerable.Range(0, n).Where(v => !processed[v] && adjacency[v].Any(x => IsCorrector(x.Node))).ToArray();
+            var rows = frontier.ToArray();
             var columns = rows.SelectMany(v => adjacency[v].Where(x => IsCorrector(x.Node)).Select(x => x.Node)).Distinct().Order().ToArray();
             var columnOf = new Dictionary<int, int>();
             for (int k = 0; k < columns.Length; k++) columnOf[columns[k]] = k;
@@ -56,8 +65,9 @@ internal sealed class RationalLayerRun
             Blocks.Add((elimination.PivotMinor, unsolvable));
             if (layer.Count == 0) break;
             Layers.Add(layer.ToArray());
-            foreach (var v in layer) processed[v] = true;
+            foreach (var v in layer) { processed[v] = true; frontier.Remove(v); }
             unprocessed -= layer.Count;
+            foreach (var v in layer) Promote(v);
         }
         Blocked = Enumerable.Range(0, n).Where(v => !processed[v]).ToArray();
     }
