@@ -169,4 +169,22 @@ public class PrimeSurveyHandCheckedTests
         Assert.False(s.IsComplete);
         AuditBelow100(s);
     }
+
+    [Fact]
+    public void TheAuditCatchesAClaimThatLeavesOutAnExceptionalPrime()
+    {
+        // The weight-2 edge again, with p = 2 removed from E by hand: the survey would then claim "same as Q"
+        // (depth 1) at 2, but the direct solve finds no flow there. The audit must report exactly that prime.
+        var honest = Survey(Parse("input a\noutput b\nedge a b 2\n"));
+        var wrong = new PrimeSurvey
+        {
+            Graph = honest.Graph, Kind = honest.Kind, Rational = honest.Rational, Integers = honest.Integers,
+            Exceptional = [], Unclassified = [],
+        };
+        var audit = PrimeAudit.Run(wrong, 30);
+        var d = Assert.Single(audit.Disagreements);
+        Assert.Equal(2UL, d.Claim.Prime);
+        Assert.Equal(PrimeClaimKind.SameAsRationals, d.Claim.Kind);
+        Assert.False(d.Direct.Result!.HasFlow);
+    }
 }
