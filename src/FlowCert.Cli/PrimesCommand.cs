@@ -4,7 +4,6 @@ using FlowCert.Algebra.Factoring;
 using FlowCert.Certificates;
 using FlowCert.Flows;
 using FlowCert.Flows.Primes;
-using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
 
@@ -42,12 +41,15 @@ public static class PrimesCommand
         var kind = CliApp.ParseKind(flowText);
         var budget = ParseSeconds(secondsText);
         ulong? upTo = checkUpToText is null ? null : ParseBound(checkUpToText);
-        var g = GraphFiles.Read(graphPath, inputs, outputs);
+        var g = GraphInput.Read(graphPath, inputs, outputs);
+        if (g.Inputs.Count == 0 && g.Outputs.Count == 0 && g.NodeCount > 0)
+            Terminal.Warn($"{GraphInput.NameOf(graphPath)}: no terminals were given (no inputs and no outputs), so every node is measured; " +
+                          "graph6, sparse6 and Matrix Market files carry none: name them with --inputs and --outputs");
         var survey = PrimeSurvey.Run(g, kind, new FactoringBudget(budget));
         var audit = upTo is { } n ? PrimeAudit.Run(survey, n) : null;
         var written = outDir is null ? [] : WriteCertificates(survey, graphPath, outDir);
-        if (json) PrimesReport.WriteJson(stdout, graphPath, survey, audit, written);
-        else PrimesReport.WriteTable(stdout, graphPath, survey, audit, written);
+        if (json) PrimesReport.WriteJson(stdout, GraphInput.NameOf(graphPath), survey, audit, written);
+        else PrimesReport.WriteTable(stdout, GraphInput.NameOf(graphPath), survey, audit, written);
         if (audit is { Disagreements.Count: > 0 }) return ExitCode.Internal;
         return survey.IsComplete ? ExitCode.Flow : ExitCode.NoFlow;
     }
@@ -66,9 +68,9 @@ public static class PrimesCommand
         return n;
     }
 
-    /// <summary>The file name of one certificate: <c>STEM.FIELD.KIND.json</c>, as the demo names them.</summary>
+    /// <summary>The file name of one certificate: <c>STEM.FIELD.KIND.json</c>, as the demo names them (STEM is <c>graph</c> for standard input).</summary>
     public static string CertificateName(string graphPath, string field, FlowKind kind)
-        => $"{Path.GetFileNameWithoutExtension(graphPath)}.{field}.{FlowKinds.Name(kind)}.json";
+        => $"{(GraphInput.IsStandardInput(graphPath) ? "graph" : Path.GetFileNameWithoutExtension(graphPath))}.{field}.{FlowKinds.Name(kind)}.json";
 
     // Like `demo --out-dir`: the folder is created if absent; a regular file of the same name is replaced
     // (asked for by naming the folder), anything else is refused by SafeFile, and the graph is never written over.

@@ -24,7 +24,7 @@ public static class PrimesReport
     {
         var g = s.Graph;
         var q = s.Rational;
-        o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs");
+        o.WriteLine($"graph     {Escaped.Of(source)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs");
         o.WriteLine($"flow      {FlowKinds.Name(s.Kind)}");
         o.WriteLine($"over Q    {Verdict(q)}");
         var origins = s.Kind == FlowKind.Causal ? "weight numerators and denominators (causal flow depends only on which weights vanish)"
@@ -66,7 +66,7 @@ public static class PrimesReport
             foreach (var d in audit.Disagreements)
                 o.WriteLine($"          p = {d.Claim.Prime}: claimed {ClaimText(d.Claim)}, solved {(d.Direct.Result is { } r ? Verdict(r) : "undefined")}");
         }
-        if (written.Count > 0) o.WriteLine($"certificates {written.Count} written: {string.Join(" ", written.Select(Path.GetFileName))} in {Path.GetDirectoryName(written[0])}");
+        if (written.Count > 0) o.WriteLine($"certificates {written.Count} written: {string.Join(" ", written.Select(f => Escaped.Of(Path.GetFileName(f))))} in {Escaped.Of(Path.GetDirectoryName(written[0]) ?? "")}");
     }
 
     // A table cell: the first few edges as VanishingEdges writes them, then how many there are (--json lists all).

@@ -180,6 +180,16 @@ public class PrimesCommandTests
     }
 
     [Fact]
+    public void StandardInputIsReadAndItsCertificatesAreNamedGraph()
+    {
+        using var w = new Workspace();
+        var run = Flowcert.WithInput(Designs.Wire, "primes", "-", "--out-dir", w.PathOf("certs"));
+        Assert.True(run.ExitCode == 0, run.ToString());
+        Assert.Contains("graph     standard input:", run.Stdout);
+        w.AssertExactly("certs/", "certs/graph.Q.general.json", "certs/graph.F2.general.json");
+    }
+
+    [Fact]
     public void CausalSurveysSayTheirCandidatesAreTheWeightPrimes()
     {
         using var w = new Workspace();
