@@ -18,9 +18,9 @@ public sealed class Field
     {
         if (text == "Q") return new Field(text, 0);
         var m = PrimeField.Match(text);
-        if (!m.Success) throw new InvalidCertificate($"unknown field \"{text}\" (expected \"Q\" or \"F\" and a prime)");
+        if (!m.Success) throw new InvalidCertificate($"unknown field \"{Json.Cut(text)}\" (expected \"Q\" or \"F\" and a prime)");
         var p = BigInteger.Parse(m.Groups[1].Value);
-        if (p >= Prime.Limit) throw new InvalidCertificate($"field {text}: p is beyond the deterministic primality test (< {Prime.Limit})");
+        if (p >= Prime.Limit) throw new InvalidCertificate($"field {Json.Cut(text)}: p is beyond the deterministic primality test (< {Prime.Limit})");
         if (!Prime.IsPrime(p)) throw new InvalidCertificate($"field {text}: {p} is not a prime");
         return new Field(text, p);
     }

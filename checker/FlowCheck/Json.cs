@@ -1,70 +1,292 @@
 using System.Numerics;
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
+using System.Text;
 
 namespace FlowCheck;
 
-/// <summary>Loads the certificate text and reads JSON values of exactly the expected shape.</summary>
-public static class Json
+/// <summary>A strict RFC 8259 JSON reader over a file read in 64 KiB chunks, never the whole text at once.
+/// <see cref="Validate"/> reads the document once (syntax, UTF-8, duplicate keys, nothing after the value)
+/// and remembers where the members of the top object (and of its "graph", "producer" and "obstruction"
+/// objects) start; the typed readers then seek there and read values of exactly the expected shape.</summary>
+public sealed class Json : IDisposable
 {
-    /// <summary>Parses one JSON document: no duplicate keys, no trailing content, numbers exact.</summary>
-    public static JToken Load(string path)
+    static readonly UTF8Encoding Utf8 = new(false, true);
+    static readonly string[] Nested = ["graph", "producer", "obstruction"];
+    readonly Stream stream;
+    readonly string path;
+    readonly Progress progress;
+    readonly byte[] buffer = new byte[1 << 16];
+    byte[] bytes = new byte[256];
+    int length, pos, line = 1, column = 1;
+
+    /// <summary>Where each remembered member value starts, by container ("" for the top object, or "graph",
+    /// "producer", "obstruction") and key.</summary>
+    readonly Dictionary<(string, string), (long Offset, int Line, int Column)> members = [];
+    /// <summary>The keys of each remembered object, in document order.</summary>
+    readonly Dictionary<string, List<string>> keysOf = [];
+
+    public Json(string path, Progress progress)
     {
-        string text;
-        try { text = File.ReadAllText(path); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        { throw new UnreadableInput($"{path}: {e.Message}"); }
+        (this.path, this.progress) = (path, progress);
         try
         {
-            using var reader = new JsonTextReader(new StringReader(text))
-            { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
-            var settings = new JsonLoadSettings { DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error };
-            var token = JToken.ReadFrom(reader, settings);
-            if (reader.Read()) throw new UnreadableInput($"{path}: content after the JSON value");
-            return token;
+            stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
+            if (!stream.CanSeek) { var copy = new MemoryStream(); stream.CopyTo(copy); stream.Dispose(); stream = copy; }
         }
-        catch (JsonReaderException e) { throw new UnreadableInput($"{path}: not JSON: {e.Message}"); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UnreadableInput($"{path}: {e.Message}"); }
     }
 
-    /// <summary>An object whose keys are all among <paramref name="known"/>.</summary>
-    public static JObject Object(JToken? token, string what, params string[] known)
+    public void Dispose() => stream.Dispose();
+
+    /// <summary>Reads the whole document once; throws <see cref="UnreadableInput"/> at the first fault, with line and column.</summary>
+    public void Validate()
     {
-        if (token is not JObject o) throw Shape(token, what, "an object");
-        foreach (var p in o.Properties())
-            if (!known.Contains(p.Name)) throw new InvalidCertificate($"unknown key \"{p.Name}\" in {what}");
-        return o;
+        Seek((0, 1, 1));
+        Skip(0, "");
+        Space();
+        if (Peek() >= 0) throw Syntax("content after the JSON value");
     }
 
-    /// <summary>An object keyed by node names, keys sorted ordinally and unique.</summary>
-    public static JObject NodeMap(JToken? token, string what)
+    void Skip(int depth, string at)
     {
-        if (token is not JObject o) throw Shape(token, what, "an object");
-        SortedUnique(o.Properties().Select(p => p.Name).ToList(), what);
-        return o;
+        if (depth > 64) throw Syntax("nesting deeper than 64 levels");
+        switch (Kind())
+        {
+            case "object":
+                var keys = new HashSet<string>(StringComparer.Ordinal);
+                foreach (var key in Object())
+                {
+                    if (!keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
+                    if (depth == 0 || (depth == 1 && Nested.Contains(at)))
+                    {
+                        members[(at, key)] = (Position, line, column);
+                        (keysOf.TryGetValue(at, out var list) ? list : keysOf[at] = []).Add(key);
+                    }
+                    Skip(depth + 1, depth == 0 ? key : "-");
+                }
+                break;
+            case "array":
+                foreach (var _ in Array()) Skip(depth + 1, "-");
+                break;
+            case "string": ReadString(); break;
+            case "true" or "false" or "null":
+                foreach (var c in Kind()) if (Take() != c) throw Syntax("misspelt literal (true, false or null)");
+                break;
+            default: Number(); break;
+        }
     }
 
-    public static JArray Array(JToken? token, string what) => token as JArray ?? throw Shape(token, what, "an array");
+    long Position => stream.Position - length + pos;
 
-    public static string String(JToken? token, string what) =>
-        token?.Type == JTokenType.String ? (string)token! : throw Shape(token, what, "a string");
+    void Seek((long Offset, int Line, int Column) at)
+    {
+        stream.Position = at.Offset;
+        (length, pos, line, column) = (0, 0, at.Line, at.Column);
+    }
 
-    /// <summary>At most 80 characters of a value from the input, then "...": a message never repeats a long value whole.</summary>
-    public static string Cut(string s) => s.Length <= 80 ? s : s[..80] + "...";
+    int Peek()
+    {
+        if (pos < length) return buffer[pos];
+        (length, pos) = (stream.Read(buffer), 0);
+        progress.Report("bytes read", stream.Position, stream.Length);
+        return length > 0 ? buffer[0] : -1;
+    }
 
-    public static List<string> Strings(JToken? token, string what) =>
-        Array(token, what).Select((t, i) => String(t, $"{what}[{i}]")).ToList();
+    int Take()
+    {
+        var b = Peek();
+        if (b < 0) throw Syntax("unexpected end of the text");
+        pos++;
+        if (b == '\n') (line, column) = (line + 1, 1);
+        else if ((b & 0xC0) != 0x80) column++;
+        return b;
+    }
 
-    public static BigInteger Integer(JToken? token, string what) =>
-        token?.Type == JTokenType.Integer ? BigInteger.Parse(token.ToString()) : throw Shape(token, what, "an integer");
+    void Space() { while (Peek() is ' ' or '\t' or '\n' or '\r') Take(); }
+
+    UnreadableInput Syntax(string what) => new($"{path}:{line}:{column}: not JSON: {what}");
+
+    /// <summary>Skips white space and names the next value's kind ("true", "false", "null" for literals; "number").</summary>
+    string Kind()
+    {
+        Space();
+        return Peek() switch
+        {
+            '{' => "object", '[' => "array", '"' => "string", 't' => "true", 'f' => "false", 'n' => "null",
+            '-' or (>= '0' and <= '9') => "number",
+            < 0 => throw Syntax("unexpected end of the text"),
+            var b => throw Syntax(b == 0 ? "NUL byte" : b < 0x80 ? $"unexpected character '{(char)b}'" : "unexpected byte"),
+        };
+    }
+
+    void Expect(char c)
+    {
+        Space();
+        if (Peek() != c) throw Syntax($"expected '{c}'");
+        Take();
+    }
+
+    /// <summary>The members of an object: yields each key; the caller reads or skips its value before the next.</summary>
+    IEnumerable<string> Object()
+    {
+        Expect('{');
+        Space();
+        if (Peek() == '}') { Take(); yield break; }
+        do
+        {
+            if (Kind() != "string") throw Syntax("expected a key in double quotes");
+            var key = ReadString();
+            Expect(':');
+            yield return key;
+        } while (Next('}'));
+    }
+
+    IEnumerable<int> Array()
+    {
+        Expect('[');
+        Space();
+        if (Peek() == ']') { Take(); yield break; }
+        var i = 0;
+        do yield return i++; while (Next(']'));
+    }
+
+    /// <summary>After a member or item: a comma (then another must follow) or the closing bracket.</summary>
+    bool Next(char close)
+    {
+        Space();
+        var b = Take();
+        if (b == ',') return true;
+        if (b == close) return false;
+        throw Syntax($"expected ',' or '{close}'");
+    }
+
+    string ReadString()
+    {
+        Take();
+        var n = 0;
+        for (var b = Take(); b != '"'; b = Take())
+        {
+            if (b < 0x20) throw Syntax("control character in a string (write it as an escape)");
+            if (n + 4 > bytes.Length) System.Array.Resize(ref bytes, bytes.Length * 2);
+            if (b != '\\') { bytes[n++] = (byte)b; continue; }
+            var e = Take();
+            int c = e switch { '"' => '"', '\\' => '\\', '/' => '/', 'b' => '\b', 'f' => '\f', 'n' => '\n', 'r' => '\r', 't' => '\t', 'u' => Hex4(), _ => -1 };
+            if (c < 0) throw Syntax("unknown escape");
+            if (c is >= 0xDC00 and < 0xE000) throw Syntax("lone low surrogate");
+            if (c is >= 0xD800 and < 0xDC00)
+            {
+                var low = Take() == '\\' && Take() == 'u' ? Hex4() : -1;
+                if (low is < 0xDC00 or >= 0xE000) throw Syntax("lone high surrogate");
+                c = 0x10000 + ((c - 0xD800) << 10) + (low - 0xDC00);
+            }
+            n += new Rune(c).EncodeToUtf8(bytes.AsSpan(n));
+        }
+        try { return Utf8.GetString(bytes, 0, n); }
+        catch (DecoderFallbackException) { throw Syntax("a string that is not UTF-8"); }
+    }
+
+    int Hex4()
+    {
+        var v = 0;
+        for (var i = 0; i < 4; i++)
+        {
+            var d = HexDigit(Take());
+            if (d < 0) throw Syntax("\\u needs four hex digits");
+            v = v * 16 + d;
+        }
+        return v;
+    }
+
+    static int HexDigit(int b) => b switch { >= '0' and <= '9' => b - '0', >= 'a' and <= 'f' => b - 'a' + 10, >= 'A' and <= 'F' => b - 'A' + 10, _ => -1 };
+
+    /// <summary>A number: -?(0|[1-9][0-9]*)(.[0-9]+)?([eE][+-]?[0-9]+)?; returns its text and whether it is an integer.</summary>
+    (string Text, bool Integer) Number()
+    {
+        var text = new StringBuilder();
+        void Digits() { if (Peek() is < '0' or > '9') throw Syntax("a digit must follow"); while (Peek() is >= '0' and <= '9') text.Append((char)Take()); }
+        if (Peek() == '-') text.Append((char)Take());
+        if (Peek() == '0') text.Append((char)Take());
+        else Digits();
+        var integer = true;
+        if (Peek() == '.') { text.Append((char)Take()); Digits(); integer = false; }
+        if (Peek() is 'e' or 'E')
+        {
+            text.Append((char)Take());
+            if (Peek() is '+' or '-') text.Append((char)Take());
+            Digits();
+            integer = false;
+        }
+        return (text.ToString(), integer);
+    }
+
+    // ---- typed reading, after Validate: a wrong shape is a verdict (InvalidCertificate), not a syntax error ----
+
+    /// <summary>Moves to a member's value (container "" is the top object); false when the member is absent.</summary>
+    public bool Find(string container, string key)
+    {
+        if (!members.TryGetValue((container, key), out var at)) return false;
+        Seek(at);
+        return true;
+    }
+
+    /// <summary>Moves to a member that must be present.</summary>
+    public Json At(string container, string key, string what) =>
+        Find(container, key) ? this : throw new InvalidCertificate($"missing {what}");
+
+    /// <summary>Requires the top object (container "") or a remembered member object whose keys are all known.</summary>
+    public void Known(string container, string what, params string[] known)
+    {
+        if (container == "") Seek((0, 1, 1));
+        else At("", container, what);
+        Expecting("object", what, "an object");
+        foreach (var key in keysOf.GetValueOrDefault(container) ?? [])
+            if (!known.Contains(key)) throw new InvalidCertificate($"unknown key \"{Cut(key)}\" in {what}");
+    }
+
+    void Expecting(string kind, string what, string expected)
+    {
+        var found = Kind();
+        if (found == kind) return;
+        if (found == "number") found = Number().Integer ? "integer" : "float";
+        if (found is "true" or "false") found = "boolean";
+        throw new InvalidCertificate($"{what} must be {expected}, found {found}");
+    }
+
+    public string String(string what) { Expecting("string", what, "a string"); return ReadString(); }
+
+    public BigInteger Integer(string what)
+    {
+        Expecting("number", what, "an integer");
+        var (text, integer) = Number();
+        return integer ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float");
+    }
+
+    /// <summary>Items of an array; the caller reads each item before asking for the next.</summary>
+    public IEnumerable<int> Items(string what) { Expecting("array", what, "an array"); return Array(); }
+
+    public List<string> Strings(string what) => Items(what).Select(i => String($"{what}[{i}]")).ToList();
+
+    /// <summary>Keys of an object keyed by node names, required strictly increasing (sorted, no duplicates).</summary>
+    public IEnumerable<string> NodeMap(string what)
+    {
+        Expecting("object", what, "an object");
+        string? before = null;
+        foreach (var key in Object())
+        {
+            if (before is not null && string.CompareOrdinal(before, key) >= 0) throw Unsorted(what, key, before);
+            yield return before = key;
+        }
+    }
 
     /// <summary>Requires strictly increasing ordinal order: sorted and free of duplicates.</summary>
     public static void SortedUnique(List<string> names, string what)
     {
         for (var i = 1; i < names.Count; i++)
-            if (string.CompareOrdinal(names[i - 1], names[i]) >= 0)
-                throw new InvalidCertificate($"{what}: \"{names[i]}\" after \"{names[i - 1]}\" (must be sorted, no duplicates)");
+            if (string.CompareOrdinal(names[i - 1], names[i]) >= 0) throw Unsorted(what, names[i], names[i - 1]);
     }
 
-    static InvalidCertificate Shape(JToken? token, string what, string expected) =>
-        new(token is null ? $"missing {what}" : $"{what} must be {expected}, found {token.Type.ToString().ToLowerInvariant()}");
+    static InvalidCertificate Unsorted(string what, string name, string before) =>
+        new($"{what}: \"{Cut(name)}\" after \"{Cut(before)}\" (must be sorted, no duplicates)");
+
+    /// <summary>At most 80 characters of a value from the input, then "...": a message never repeats a long value whole.</summary>
+    public static string Cut(string s) => s.Length <= 80 ? s : s[..80] + "...";
 }
