@@ -39,7 +39,7 @@ public static class EmbeddedGraph
         var weights = new Dictionary<string, int>(StringComparer.Ordinal);
         foreach (var i in json.At("graph", "edges", "graph.edges").Items("graph.edges"))
         {
-            var e = json.Strings($"graph.edges[{i}]");
+            var e = json.Strings("graph.edges", i);
             if (e.Count != 3) throw new InvalidCertificate($"graph.edges[{i}] must be [u, v, weight], found {e.Count} items");
             var (u, v) = (Json.Cut(e[0]), Json.Cut(e[1]));
             if (!index.TryGetValue(e[0], out var a) || !index.TryGetValue(e[1], out var b))

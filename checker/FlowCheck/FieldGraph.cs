@@ -65,8 +65,12 @@ public sealed class Accumulator(FieldGraph g)
 
     public Rational this[int node] => set[node] ? value[node] : Rational.Zero;
 
-    /// <summary>The nodes with a non-zero entry, in ordinal order of their names.</summary>
-    public List<int> NonZero() => touched.Where(w => !value[w].Num.IsZero).Order().ToList();
+    /// <summary>The nodes with an entry (perhaps zero), in ordinal order of their names.</summary>
+    public List<int> Touched()
+    {
+        touched.Sort();
+        return touched;
+    }
 
     public void Clear()
     {

@@ -12,7 +12,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
     public int Check(Json json)
     {
         var rounds = 0;
-        foreach (var i in json.At("", "rounds", "rounds").Items("rounds")) ReadRound(json.Strings($"rounds[{i}]"), ++rounds);
+        foreach (var i in json.At("", "rounds", "rounds").Items("rounds")) ReadRound(json.Strings("rounds", i), ++rounds);
         var measured = 0;
         for (var v = 0; v < g.Count; v++)
             if (!g.IsOutput(v) && round[v] == 0) throw new InvalidCertificate($"measured node {g.Name(v)} is in no round");
@@ -62,9 +62,9 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
     {
         var name = g.Name(v);
         c.Clear();
-        foreach (var key in json.NodeMap($"corrections.{name}"))
+        foreach (var key in json.NodeMap("corrections", name))
         {
-            var text = json.String($"corrections.{name}.{key}");
+            var text = json.String($"corrections.{name}", key);
             if (!g.Graph.Index.TryGetValue(key, out var u)) throw new InvalidCertificate($"node {name}: correction on unknown node {Json.Cut(key)}");
             var x = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
                 $"node {name}: c_{name}({key}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
@@ -78,8 +78,8 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
                 product.Add(w, g.Field.Mul(a, x));
         var self = product[v];
         if (self != Rational.One) throw new InvalidCertificate($"node {name}: (A c_{name})({name}) = {self.Show()}, not 1");
-        foreach (var w in product.NonZero())
-            if (w != v && !IsLater(w, v))
+        foreach (var w in product.Touched())
+            if (w != v && !product[w].Num.IsZero && !IsLater(w, v))
                 throw new InvalidCertificate(
                     $"node {name} (round {round[v]}): (A c_{name})({g.Name(w)}) = {product[w].Show()} is non-zero but {g.Name(w)} is in round {round[w]}, not later");
         product.Clear();

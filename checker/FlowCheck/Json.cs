@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Numerics;
 using System.Text;
 
@@ -11,6 +12,8 @@ public sealed class Json : IDisposable
 {
     static readonly UTF8Encoding Utf8 = new(false, true);
     static readonly string[] Nested = ["graph", "producer", "obstruction"];
+    static readonly SearchValues<byte> Special = SearchValues.Create([(byte)'"', (byte)'\\', .. Enumerable.Range(0, 32).Select(b => (byte)b)]);
+    readonly List<HashSet<string>> keySets = [];
     readonly Stream stream;
     readonly string path;
     readonly Progress progress;
@@ -52,7 +55,9 @@ public sealed class Json : IDisposable
         switch (Kind())
         {
             case "object":
-                var keys = new HashSet<string>(StringComparer.Ordinal);
+                while (keySets.Count <= depth) keySets.Add(new(StringComparer.Ordinal));
+                var keys = keySets[depth];
+                keys.Clear();
                 foreach (var key in Object())
                 {
                     if (!keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
@@ -67,9 +72,11 @@ public sealed class Json : IDisposable
             case "array":
                 foreach (var _ in Array()) Skip(depth + 1, "-");
                 break;
-            case "string": ReadString(); break;
+            case "string": ReadString(keep: false); break;
             case "true" or "false" or "null":
-                foreach (var c in Kind()) if (Take() != c) throw Syntax("misspelt literal (true, false or null)");
+                foreach (var c in Kind())
+                    if (Peek() == c) Take();
+                    else throw Syntax("misspelt literal (true, false or null)");
                 break;
             default: Number(); break;
         }
@@ -101,7 +108,12 @@ public sealed class Json : IDisposable
         return b;
     }
 
-    void Space() { while (Peek() is ' ' or '\t' or '\n' or '\r') Take(); }
+    void Space()
+    {
+        for (int b; (b = Peek()) is ' ' or '\t' or '\n' or '\r'; pos++)
+            if (b == '\n') (line, column) = (line + 1, 1);
+            else column++;
+    }
 
     UnreadableInput Syntax(string what) => new($"{path}:{line}:{column}: not JSON: {what}");
 
@@ -133,8 +145,9 @@ public sealed class Json : IDisposable
         if (Peek() == '}') { Take(); yield break; }
         do
         {
-            if (Kind() != "string") throw Syntax("expected a key in double quotes");
-            var key = ReadString();
+            Space();
+            if (Peek() != '"') throw Syntax("expected a key in double quotes");
+            var key = ReadString()!;
             Expect(':');
             yield return key;
         } while (Next('}'));
@@ -153,24 +166,38 @@ public sealed class Json : IDisposable
     bool Next(char close)
     {
         Space();
-        var b = Take();
-        if (b == ',') return true;
-        if (b == close) return false;
-        throw Syntax($"expected ',' or '{close}'");
+        var b = Peek();
+        if (b != ',' && b != close) throw Syntax($"expected ',' or '{close}'");
+        Take();
+        return b == ',';
     }
 
-    string ReadString()
+    /// <summary>A string; the usual case, a string without escapes inside the buffer, is decoded in place.
+    /// Without <paramref name="keep"/> it is only validated (null is returned).</summary>
+    string? ReadString(bool keep = true)
     {
         Take();
-        var n = 0;
-        for (var b = Take(); b != '"'; b = Take())
+        var rest = buffer.AsSpan(pos, length - pos);
+        var end = rest.IndexOfAny(Special);
+        if (end >= 0 && rest[end] == '"')
         {
-            if (b < 0x20) throw Syntax("control character in a string (write it as an escape)");
+            var text = rest[..end];
+            if (!System.Text.Unicode.Utf8.IsValid(text)) throw Syntax("a string that is not UTF-8");
+            (pos, column) = (pos + end + 1, column + 1 + CodePoints(text));
+            return keep ? Utf8.GetString(text) : null;
+        }
+        var n = 0;
+        for (var b = Peek(); b != '"'; b = Peek())
+        {
+            if (b is >= 0 and < 0x20) throw Syntax("control character in a string (write it as an escape)");
+            Take();
             if (n + 4 > bytes.Length) System.Array.Resize(ref bytes, bytes.Length * 2);
             if (b != '\\') { bytes[n++] = (byte)b; continue; }
-            var e = Take();
-            int c = e switch { '"' => '"', '\\' => '\\', '/' => '/', 'b' => '\b', 'f' => '\f', 'n' => '\n', 'r' => '\r', 't' => '\t', 'u' => Hex4(), _ => -1 };
+            var e = Peek();
+            int c = e switch { '"' => '"', '\\' => '\\', '/' => '/', 'b' => '\b', 'f' => '\f', 'n' => '\n', 'r' => '\r', 't' => '\t', 'u' => 0, _ => -1 };
             if (c < 0) throw Syntax("unknown escape");
+            Take();
+            if (e == 'u') c = Hex4();
             if (c is >= 0xDC00 and < 0xE000) throw Syntax("lone low surrogate");
             if (c is >= 0xD800 and < 0xDC00)
             {
@@ -180,8 +207,16 @@ public sealed class Json : IDisposable
             }
             n += new Rune(c).EncodeToUtf8(bytes.AsSpan(n));
         }
+        Take();
         try { return Utf8.GetString(bytes, 0, n); }
         catch (DecoderFallbackException) { throw Syntax("a string that is not UTF-8"); }
+    }
+
+    static int CodePoints(ReadOnlySpan<byte> text)
+    {
+        var n = text.Length;
+        if (!System.Text.Ascii.IsValid(text)) foreach (var b in text) if ((b & 0xC0) == 0x80) n--;
+        return n;
     }
 
     int Hex4()
@@ -242,16 +277,20 @@ public sealed class Json : IDisposable
             if (!known.Contains(key)) throw new InvalidCertificate($"unknown key \"{Cut(key)}\" in {what}");
     }
 
-    void Expecting(string kind, string what, string expected)
+    /// <summary>Requires the next value's kind; the message names <paramref name="what"/> with ".key" or "[index]" if given
+    /// (composed only for the message: most values are read without one).</summary>
+    void Expecting(string kind, string what, string expected, string? key = null, int index = -1)
     {
         var found = Kind();
         if (found == kind) return;
+        if (key is not null) what = $"{what}.{Cut(key)}";
+        if (index >= 0) what = $"{what}[{index}]";
         if (found == "number") found = Number().Integer ? "integer" : "float";
         if (found is "true" or "false") found = "boolean";
         throw new InvalidCertificate($"{what} must be {expected}, found {found}");
     }
 
-    public string String(string what) { Expecting("string", what, "a string"); return ReadString(); }
+    public string String(string what, string? key = null) { Expecting("string", what, "a string", key); return ReadString()!; }
 
     public BigInteger Integer(string what)
     {
@@ -261,14 +300,25 @@ public sealed class Json : IDisposable
     }
 
     /// <summary>Items of an array; the caller reads each item before asking for the next.</summary>
-    public IEnumerable<int> Items(string what) { Expecting("array", what, "an array"); return Array(); }
+    public IEnumerable<int> Items(string what, int index = -1) { Expecting("array", what, "an array", null, index); return Array(); }
 
-    public List<string> Strings(string what) => Items(what).Select(i => String($"{what}[{i}]")).ToList();
+    /// <summary>An array of strings; <paramref name="index"/>, when given, says the array is item [index] of <paramref name="what"/>.</summary>
+    public List<string> Strings(string what, int index = -1)
+    {
+        var list = new List<string>();
+        foreach (var i in Items(what, index))
+        {
+            if (Kind() != "string") Expecting("string", index < 0 ? what : $"{what}[{index}]", "a string", null, i);
+            list.Add(ReadString()!);
+        }
+        return list;
+    }
 
     /// <summary>Keys of an object keyed by node names, required strictly increasing (sorted, no duplicates).</summary>
-    public IEnumerable<string> NodeMap(string what)
+    public IEnumerable<string> NodeMap(string what, string? owner = null)
     {
-        Expecting("object", what, "an object");
+        Expecting("object", what, "an object", owner);
+        if (owner is not null) what = $"{what}.{owner}";
         string? before = null;
         foreach (var key in Object())
         {

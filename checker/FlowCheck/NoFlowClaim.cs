@@ -54,7 +54,7 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress)
             var what = $"obstruction.witnesses[{i}]";
             foreach (var key in json.NodeMap(what))
             {
-                var text = json.String($"{what}.{key}");
+                var text = json.String(what, key);
                 if (!g.Graph.Index.TryGetValue(key, out var x) || !inU[x])
                     throw new InvalidCertificate($"{what}: entry on {Json.Cut(key)}, which is not in the blocked set");
                 var y = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
@@ -63,7 +63,7 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress)
                 foreach (var (w, a) in g.Neighbours(x).Where(e => IsCorrector(e.Node)))
                     product.Add(w, g.Field.Mul(y, a));
             }
-            foreach (var w in product.NonZero())
+            foreach (var w in product.Touched().Where(w => !product[w].Num.IsZero))
                 throw new InvalidCertificate($"{what}: (y^T A)({g.Name(w)}) = {product[w].Show()} for corrector {g.Name(w)}, not 0");
             product.Clear();
             progress.Report("witnesses checked", i + 1, blocked.Count);
