@@ -32,27 +32,15 @@ public static class Certificate
         var g = new FieldGraph(graph, field);
         var verdict = json.At("", "verdict", "verdict").String("verdict");
         var causal = flow == "causal";
-        string proven;
-        if (verdict == "flow")
-        {
-            Absent(json, verdict, "obstruction");
-            proven = $"{flow} flow over {field.Name}, depth {new FlowClaim(g, causal, progress).Check(json)}";
-        }
-        else if (verdict == "noflow")
-        {
-            Absent(json, verdict, "depth", "rounds", "corrections");
-            proven = $"no {flow} flow over {field.Name}, blocked set of {new NoFlowClaim(g, causal, progress).Check(json)} nodes";
-        }
-        else throw new InvalidCertificate($"unknown verdict \"{Json.Cut(verdict)}\" (expected flow or noflow)");
+        if (verdict is not ("flow" or "noflow")) throw new InvalidCertificate($"unknown verdict \"{Json.Cut(verdict)}\" (expected flow or noflow)");
+        foreach (var key in (verdict == "flow" ? ["obstruction"] : new[] { "depth", "rounds", "corrections" }).Where(k => json.Find("", k)))
+            throw new InvalidCertificate($"key \"{key}\" does not belong to a \"{verdict}\" certificate");
+        var proven = verdict == "flow"
+            ? $"{flow} flow over {field.Name}, depth {new FlowClaim(g, causal, progress).Check(json)}"
+            : $"no {flow} flow over {field.Name}, blocked set of {new NoFlowClaim(g, causal, progress).Check(json)} nodes";
         var lines = new List<string> { $"valid: {proven}, graph sha256 {hash}" };
         if (fileGraph is not null) lines.Add($"note: graph file {graphPath} matches the embedded graph");
         lines.AddRange(g.Vanished.Select(e => $"note: edge {g.Name(e.U)} {g.Name(e.V)} (weight {Json.Cut(graph.WeightText[e.W])}) vanishes in {field.Name}"));
         return lines;
-    }
-
-    static void Absent(Json json, string verdict, params string[] keys)
-    {
-        foreach (var key in keys.Where(k => json.Find("", k)))
-            throw new InvalidCertificate($"key \"{key}\" does not belong to a \"{verdict}\" certificate");
     }
 }

@@ -2,12 +2,8 @@ namespace FlowCheck;
 
 /// <summary>The embedded graph, compact: node names sorted ordinally (a node is its rank in that order),
 /// roles, and edges as pairs of ranks with an index into the distinct weights.</summary>
-public sealed class Graph
+public sealed record Graph(string[] Names, Dictionary<string, int> Index, bool[] Input, bool[] Output)
 {
-    public required string[] Names { get; init; }
-    public required Dictionary<string, int> Index { get; init; }
-    public required bool[] Input { get; init; }
-    public required bool[] Output { get; init; }
     public List<(int U, int V, int W)> Edges { get; } = [];
     public List<string> WeightText { get; } = [];
     public List<Rational> Weights { get; } = [];
@@ -16,11 +12,10 @@ public sealed class Graph
     {
         var touched = new bool[Names.Length];
         foreach (var (u, v, _) in Edges) touched[u] = touched[v] = true;
-        return CanonicalHash.Of(append => CanonicalHash.Write(append, Roles(Input), Roles(Output),
-            Enumerable.Range(0, Names.Length).Where(i => !touched[i]).Select(i => Names[i]), Edges.Select(e => (Names[e.U], Names[e.V], WeightText[e.W]))));
+        IEnumerable<string> Where(Func<int, bool> keep) => Enumerable.Range(0, Names.Length).Where(keep).Select(i => Names[i]);
+        return CanonicalForm.Sha256(CanonicalForm.Lines(Where(i => Input[i]), Where(i => Output[i]), Where(i => !touched[i]),
+            Edges.Select(e => (Names[e.U], Names[e.V], WeightText[e.W]))));
     }
-
-    IEnumerable<string> Roles(bool[] role) => Enumerable.Range(0, Names.Length).Where(i => role[i]).Select(i => Names[i]);
 }
 
 /// <summary>Reads the certificate's "graph" object, requiring exactly the canonical shape of docs/formats.md.</summary>
@@ -32,7 +27,7 @@ public static class EmbeddedGraph
         var nodes = Names(json, "nodes");
         var index = new Dictionary<string, int>(nodes.Count, StringComparer.Ordinal);
         for (var i = 0; i < nodes.Count; i++) index[nodes[i]] = i;
-        var g = new Graph { Names = [.. nodes], Index = index, Input = new bool[nodes.Count], Output = new bool[nodes.Count] };
+        var g = new Graph([.. nodes], index, new bool[nodes.Count], new bool[nodes.Count]);
         foreach (var (key, role) in new[] { ("inputs", g.Input), ("outputs", g.Output) })
             foreach (var n in Names(json, key))
                 role[index.TryGetValue(n, out var i) ? i : throw new InvalidCertificate($"graph: input/output {Json.Cut(n)} is not in graph.nodes")] = true;

@@ -13,8 +13,7 @@ public sealed class FieldGraph
     public FieldGraph(Graph graph, Field field)
     {
         (Field, Graph) = (field, graph);
-        var n = graph.Names.Length;
-        var reduced = new Rational?[graph.Weights.Count];
+        var (n, reduced) = (graph.Names.Length, new Rational?[graph.Weights.Count]);
         (start, values) = (new int[n + 1], new Rational[graph.Weights.Count]);
         var kept = new List<(int U, int V, int W)>();
         foreach (var e in graph.Edges)
@@ -24,8 +23,7 @@ public sealed class FieldGraph
             values[e.W] = w;
             if (w.Num.IsZero) { Vanished.Add(e); continue; }
             kept.Add(e);
-            start[e.U + 1]++;
-            start[e.V + 1]++;
+            (start[e.U + 1], start[e.V + 1]) = (start[e.U + 1] + 1, start[e.V + 1] + 1);
         }
         for (var i = 0; i < n; i++) start[i + 1] += start[i];
         (adjacent, weight) = (new int[start[n]], new int[start[n]]);
@@ -38,43 +36,19 @@ public sealed class FieldGraph
     }
 
     public int Count => Graph.Names.Length;
+    /// <summary>A sum of field elements per node, accumulated in <paramref name="sum"/>.</summary>
+    public void Add(Dictionary<int, Rational> sum, int node, Rational x) => sum[node] = sum.TryGetValue(node, out var y) ? Field.Add(y, x) : x;
     public string Name(int node) => Graph.Names[node];
     public bool IsInput(int node) => Graph.Input[node];
+
+    /// <summary>The rank of a measured node (a node that is not an output); otherwise throws "<paramref name="where"/>: NAME is not a measured node".</summary>
+    public int Measured(string name, string where) => Graph.Index.TryGetValue(name, out var v) && !IsOutput(v) ? v
+        : throw new InvalidCertificate($"{where}: {Json.Cut(name)} is not a measured node");
     public bool IsOutput(int node) => Graph.Output[node];
 
     /// <summary>The neighbours of a node in the field, with the weight of the edge.</summary>
     public IEnumerable<(int Node, Rational A)> Neighbours(int node)
     {
         for (var k = start[node]; k < start[node + 1]; k++) yield return (adjacent[k], values[weight[k]]);
-    }
-}
-
-/// <summary>A sparse vector of field elements over the nodes, summed into in place and cleared after use.</summary>
-public sealed class Accumulator(FieldGraph g)
-{
-    readonly Rational[] value = new Rational[g.Count];
-    readonly bool[] set = new bool[g.Count];
-    readonly List<int> touched = [];
-
-    public void Add(int node, Rational x)
-    {
-        if (set[node]) { value[node] = g.Field.Add(value[node], x); return; }
-        (set[node], value[node]) = (true, x);
-        touched.Add(node);
-    }
-
-    public Rational this[int node] => set[node] ? value[node] : Rational.Zero;
-
-    /// <summary>The nodes with an entry (perhaps zero), in ordinal order of their names.</summary>
-    public List<int> Touched()
-    {
-        touched.Sort();
-        return touched;
-    }
-
-    public void Clear()
-    {
-        foreach (var w in touched) set[w] = false;
-        touched.Clear();
     }
 }

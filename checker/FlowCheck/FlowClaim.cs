@@ -5,7 +5,7 @@ namespace FlowCheck;
 public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
 {
     readonly int[] round = new int[g.Count];
-    readonly Accumulator product = new(g);
+    readonly Dictionary<int, Rational> product = [];
     readonly List<(int U, Rational X)> c = [];
 
     /// <summary>Returns the depth proven, or throws naming the first failing node.</summary>
@@ -13,34 +13,24 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
     {
         var rounds = 0;
         foreach (var i in json.At("", "rounds", "rounds").Items("rounds")) ReadRound(json.Strings("rounds", i), ++rounds);
-        var measured = 0;
         for (var v = 0; v < g.Count; v++)
             if (!g.IsOutput(v) && round[v] == 0) throw new InvalidCertificate($"measured node {g.Name(v)} is in no round");
-            else if (!g.IsOutput(v)) measured++;
         var depth = json.At("", "depth", "depth").Integer("depth");
         if (depth != rounds) throw new InvalidCertificate($"depth is {Rational.Show(depth)} but there are {rounds} rounds");
         var (next, missing) = (0, -1);
         foreach (var key in json.At("", "corrections", "corrections").NodeMap("corrections"))
         {
-            if (!g.Graph.Index.TryGetValue(key, out var v) || g.IsOutput(v))
-                throw new InvalidCertificate($"corrections: {Json.Cut(key)} is not a measured node");
-            if (missing < 0) missing = Missing(next, v);
-            next = v + 1;
+            var v = g.Measured(key, "corrections");
+            (missing, next) = (missing < 0 ? Missing(next, v) : missing, v + 1);
             CheckCorrection(v, json);
             progress.Report("correction vectors checked", v, g.Count);
         }
-        if (missing < 0) missing = Missing(next, g.Count);
-        if (missing >= 0) throw new InvalidCertificate($"node {g.Name(missing)}: no correction vector");
+        if ((missing < 0 ? Missing(next, g.Count) : missing) is >= 0 and var first) throw new InvalidCertificate($"node {g.Name(first)}: no correction vector");
         return rounds;
     }
 
     /// <summary>The first measured node in [from, to) (they have no vector), or -1; reported after the map is read.</summary>
-    int Missing(int from, int to)
-    {
-        for (var v = from; v < to; v++)
-            if (!g.IsOutput(v)) return v;
-        return -1;
-    }
+    int Missing(int from, int to) => Enumerable.Range(from, to - from).FirstOrDefault(v => !g.IsOutput(v), -1);
 
     void ReadRound(List<string> nodes, int r)
     {
@@ -48,8 +38,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
         Json.SortedUnique(nodes, $"round {r}");
         foreach (var name in nodes)
         {
-            if (!g.Graph.Index.TryGetValue(name, out var v) || g.IsOutput(v))
-                throw new InvalidCertificate($"round {r}: {Json.Cut(name)} is not a measured node");
+            var v = g.Measured(name, $"round {r}");
             if (round[v] != 0) throw new InvalidCertificate($"node {name} is in round {round[v]} and in round {r}");
             round[v] = r;
         }
@@ -66,8 +55,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
         {
             var text = json.String($"corrections.{name}", key);
             if (!g.Graph.Index.TryGetValue(key, out var u)) throw new InvalidCertificate($"node {name}: correction on unknown node {Json.Cut(key)}");
-            var x = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
-                $"node {name}: c_{name}({key}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
+            var x = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate($"node {name}: c_{name}({key}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
             if (g.IsInput(u)) throw new InvalidCertificate($"node {name}: correction on input {key}");
             if (!IsLater(u, v)) throw new InvalidCertificate($"node {name} (round {round[v]}): correction on {key} (in round {round[u]}), which is not later");
             c.Add((u, x));
@@ -75,13 +63,12 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
         if (causal) CheckCausal(v, name);
         foreach (var (u, x) in c)
             foreach (var (w, a) in g.Neighbours(u))
-                product.Add(w, g.Field.Mul(a, x));
-        var self = product[v];
+                g.Add(product, w, g.Field.Mul(a, x));
+        var self = product.GetValueOrDefault(v, Rational.Zero);
         if (self != Rational.One) throw new InvalidCertificate($"node {name}: (A c_{name})({name}) = {self.Show()}, not 1");
-        foreach (var w in product.Touched())
+        foreach (var w in product.Keys.Order())
             if (w != v && !product[w].Num.IsZero && !IsLater(w, v))
-                throw new InvalidCertificate(
-                    $"node {name} (round {round[v]}): (A c_{name})({g.Name(w)}) = {product[w].Show()} is non-zero but {g.Name(w)} is in round {round[w]}, not later");
+                throw new InvalidCertificate($"node {name} (round {round[v]}): (A c_{name})({g.Name(w)}) = {product[w].Show()} is non-zero but {g.Name(w)} is in round {round[w]}, not later");
         product.Clear();
     }
 

@@ -24,18 +24,13 @@ public sealed class Json : IDisposable
     /// <summary>Where each remembered member value starts, by container ("" for the top object, or "graph",
     /// "producer", "obstruction") and key.</summary>
     readonly Dictionary<(string, string), (long Offset, int Line, int Column)> members = [];
-    /// <summary>The keys of each remembered object, in document order.</summary>
-    readonly Dictionary<string, List<string>> keysOf = [];
 
     public Json(string path, Progress progress)
     {
         (this.path, this.progress) = (path, progress);
-        try
-        {
-            stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
-            if (!stream.CanSeek) { var copy = new MemoryStream(); stream.CopyTo(copy); stream.Dispose(); stream = copy; }
-        }
+        try { stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan); }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UnreadableInput($"{path}: {e.Message}"); }
+        if (!stream.CanSeek) { var copy = new MemoryStream(); stream.CopyTo(copy); stream.Dispose(); stream = copy; }
     }
 
     public void Dispose() => stream.Dispose();
@@ -45,8 +40,7 @@ public sealed class Json : IDisposable
     {
         Seek((0, 1, 1));
         Skip(0, "");
-        Space();
-        if (Peek() >= 0) throw Syntax("content after the JSON value");
+        if (Kind(end: true) != "end") throw Syntax("content after the JSON value");
     }
 
     void Skip(int depth, string at)
@@ -61,33 +55,23 @@ public sealed class Json : IDisposable
                 foreach (var key in Object())
                 {
                     if (!keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
-                    if (depth == 0 || (depth == 1 && Nested.Contains(at)))
-                    {
-                        members[(at, key)] = (Position, line, column);
-                        (keysOf.TryGetValue(at, out var list) ? list : keysOf[at] = []).Add(key);
-                    }
+                    if (depth == 0 || (depth == 1 && Nested.Contains(at))) members[(at, key)] = (Position, line, column);
                     Skip(depth + 1, depth == 0 ? key : "-");
                 }
                 break;
-            case "array":
-                foreach (var _ in Array()) Skip(depth + 1, "-");
-                break;
+            case "array": foreach (var _ in Array()) Skip(depth + 1, "-"); break;
             case "string": ReadString(keep: false); break;
-            case "true" or "false" or "null":
-                foreach (var c in Kind())
-                    if (Peek() == c) Take();
-                    else throw Syntax("misspelt literal (true, false or null)");
-                break;
-            default: Number(); break;
+            case "number": Number(); break;
+            default: foreach (var c in Kind()) if (Peek() == c) Take(); else throw Syntax("misspelt literal (true, false or null)"); break;
         }
     }
 
     long Position => stream.Position - length + pos;
 
-    void Seek((long Offset, int Line, int Column) at)
+    bool Seek((long Offset, int Line, int Column) at)
     {
-        stream.Position = at.Offset;
-        (length, pos, line, column) = (0, 0, at.Line, at.Column);
+        (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column);
+        return true;
     }
 
     int Peek()
@@ -100,53 +84,41 @@ public sealed class Json : IDisposable
 
     int Take()
     {
-        var b = Peek();
-        if (b < 0) throw Syntax("unexpected end of the text");
-        pos++;
-        if (b == '\n') (line, column) = (line + 1, 1);
-        else if ((b & 0xC0) != 0x80) column++;
+        var b = Peek() is >= 0 and var next ? next : throw Syntax("unexpected end of the text");
+        (pos, line, column) = (pos + 1, b == '\n' ? line + 1 : line, b == '\n' ? 1 : (b & 0xC0) != 0x80 ? column + 1 : column);
         return b;
     }
 
-    void Space()
+    /// <summary>Skips white space; returns the next byte (-1 at the end).</summary>
+    int Space()
     {
-        for (int b; (b = Peek()) is ' ' or '\t' or '\n' or '\r'; pos++)
-            if (b == '\n') (line, column) = (line + 1, 1);
-            else column++;
+        int b;
+        for (; (b = Peek()) is ' ' or '\t' or '\n' or '\r'; pos++) (line, column) = b == '\n' ? (line + 1, 1) : (line, column + 1);
+        return b;
     }
 
     UnreadableInput Syntax(string what) => new($"{path}:{line}:{column}: not JSON: {what}");
 
-    /// <summary>Skips white space and names the next value's kind ("true", "false", "null" for literals; "number").</summary>
-    string Kind()
-    {
-        Space();
-        return Peek() switch
+    /// <summary>Skips white space and names the next value's kind ("true", "false", "null" for literals; "number";
+    /// "end" at the end of the text if <paramref name="end"/> allows it).</summary>
+    string Kind(bool end = false) =>
+        Space() switch
         {
             '{' => "object", '[' => "array", '"' => "string", 't' => "true", 'f' => "false", 'n' => "null",
-            '-' or (>= '0' and <= '9') => "number",
-            < 0 => throw Syntax("unexpected end of the text"),
-            var b => throw Syntax(b == 0 ? "NUL byte" : b < 0x80 ? $"unexpected character '{(char)b}'" : "unexpected byte"),
+            '-' or (>= '0' and <= '9') => "number", < 0 when end => "end", < 0 => throw Syntax("unexpected end of the text"),
+            var b => throw Syntax(end ? "content after the JSON value" : b == 0 ? "NUL byte" : b < 0x80 ? $"unexpected character '{(char)b}'" : "unexpected byte"),
         };
-    }
 
-    void Expect(char c)
-    {
-        Space();
-        if (Peek() != c) throw Syntax($"expected '{c}'");
-        Take();
-    }
+    void Expect(char c) { if (Space() == c) Take(); else throw Syntax($"expected '{c}'"); }
 
     /// <summary>The members of an object: yields each key; the caller reads or skips its value before the next.</summary>
     IEnumerable<string> Object()
     {
         Expect('{');
-        Space();
-        if (Peek() == '}') { Take(); yield break; }
+        if (Space() == '}' && Take() > 0) yield break;
         do
         {
-            Space();
-            if (Peek() != '"') throw Syntax("expected a key in double quotes");
+            if (Space() != '"') throw Syntax("expected a key in double quotes");
             var key = ReadString()!;
             Expect(':');
             yield return key;
@@ -156,8 +128,7 @@ public sealed class Json : IDisposable
     IEnumerable<int> Array()
     {
         Expect('[');
-        Space();
-        if (Peek() == ']') { Take(); yield break; }
+        if (Space() == ']' && Take() > 0) yield break;
         var i = 0;
         do yield return i++; while (Next(']'));
     }
@@ -165,10 +136,7 @@ public sealed class Json : IDisposable
     /// <summary>After a member or item: a comma (then another must follow) or the closing bracket.</summary>
     bool Next(char close)
     {
-        Space();
-        var b = Peek();
-        if (b != ',' && b != close) throw Syntax($"expected ',' or '{close}'");
-        Take();
+        var b = Space() is var next && (next == ',' || next == close) ? Take() : throw Syntax($"expected ',' or '{close}'");
         return b == ',';
     }
 
@@ -183,7 +151,7 @@ public sealed class Json : IDisposable
         {
             var text = rest[..end];
             if (!System.Text.Unicode.Utf8.IsValid(text)) throw Syntax("a string that is not UTF-8");
-            (pos, column) = (pos + end + 1, column + 1 + CodePoints(text));
+            (pos, column) = (pos + end + 1, column + 1 + (System.Text.Ascii.IsValid(text) ? end : Utf8.GetCharCount(text)));
             return keep ? Utf8.GetString(text) : null;
         }
         var n = 0;
@@ -212,26 +180,14 @@ public sealed class Json : IDisposable
         catch (DecoderFallbackException) { throw Syntax("a string that is not UTF-8"); }
     }
 
-    static int CodePoints(ReadOnlySpan<byte> text)
-    {
-        var n = text.Length;
-        if (!System.Text.Ascii.IsValid(text)) foreach (var b in text) if ((b & 0xC0) == 0x80) n--;
-        return n;
-    }
-
     int Hex4()
     {
         var v = 0;
         for (var i = 0; i < 4; i++)
-        {
-            var d = HexDigit(Take());
-            if (d < 0) throw Syntax("\\u needs four hex digits");
-            v = v * 16 + d;
-        }
+            v = v * 16 + (Take() switch { var b and >= '0' and <= '9' => b - '0', var b and >= 'a' and <= 'f' => b - 'a' + 10,
+                var b and >= 'A' and <= 'F' => b - 'A' + 10, _ => throw Syntax("\\u needs four hex digits") });
         return v;
     }
-
-    static int HexDigit(int b) => b switch { >= '0' and <= '9' => b - '0', >= 'a' and <= 'f' => b - 'a' + 10, >= 'A' and <= 'F' => b - 'A' + 10, _ => -1 };
 
     /// <summary>A number: -?(0|[1-9][0-9]*)(.[0-9]+)?([eE][+-]?[0-9]+)?; returns its text and whether it is an integer.</summary>
     (string Text, bool Integer) Number()
@@ -243,25 +199,17 @@ public sealed class Json : IDisposable
         else Digits();
         var integer = true;
         if (Peek() == '.') { text.Append((char)Take()); Digits(); integer = false; }
-        if (Peek() is 'e' or 'E')
-        {
-            text.Append((char)Take());
-            if (Peek() is '+' or '-') text.Append((char)Take());
-            Digits();
-            integer = false;
-        }
-        return (text.ToString(), integer);
+        if (Peek() is not ('e' or 'E')) return (text.ToString(), integer);
+        text.Append((char)Take());
+        if (Peek() is '+' or '-') text.Append((char)Take());
+        Digits();
+        return (text.ToString(), false);
     }
 
     // ---- typed reading, after Validate: a wrong shape is a verdict (InvalidCertificate), not a syntax error ----
 
     /// <summary>Moves to a member's value (container "" is the top object); false when the member is absent.</summary>
-    public bool Find(string container, string key)
-    {
-        if (!members.TryGetValue((container, key), out var at)) return false;
-        Seek(at);
-        return true;
-    }
+    public bool Find(string container, string key) => members.TryGetValue((container, key), out var at) && Seek(at);
 
     /// <summary>Moves to a member that must be present.</summary>
     public Json At(string container, string key, string what) =>
@@ -273,8 +221,8 @@ public sealed class Json : IDisposable
         if (container == "") Seek((0, 1, 1));
         else At("", container, what);
         Expecting("object", what, "an object");
-        foreach (var key in keysOf.GetValueOrDefault(container) ?? [])
-            if (!known.Contains(key)) throw new InvalidCertificate($"unknown key \"{Cut(key)}\" in {what}");
+        foreach (var (_, key) in members.Keys.Where(m => m.Item1 == container && !known.Contains(m.Item2)))
+            throw new InvalidCertificate($"unknown key \"{Cut(key)}\" in {what}");
     }
 
     /// <summary>Requires the next value's kind; the message names <paramref name="what"/> with ".key" or "[index]" if given
@@ -290,29 +238,20 @@ public sealed class Json : IDisposable
         throw new InvalidCertificate($"{what} must be {expected}, found {found}");
     }
 
-    public string String(string what, string? key = null) { Expecting("string", what, "a string", key); return ReadString()!; }
+    public string String(string what, string? key = null, int index = -1) { Expecting("string", what, "a string", key, index); return ReadString()!; }
 
     public BigInteger Integer(string what)
     {
         Expecting("number", what, "an integer");
-        var (text, integer) = Number();
-        return integer ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float");
+        return Number() is (var text, true) ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float");
     }
 
     /// <summary>Items of an array; the caller reads each item before asking for the next.</summary>
     public IEnumerable<int> Items(string what, int index = -1) { Expecting("array", what, "an array", null, index); return Array(); }
 
     /// <summary>An array of strings; <paramref name="index"/>, when given, says the array is item [index] of <paramref name="what"/>.</summary>
-    public List<string> Strings(string what, int index = -1)
-    {
-        var list = new List<string>();
-        foreach (var i in Items(what, index))
-        {
-            if (Kind() != "string") Expecting("string", index < 0 ? what : $"{what}[{index}]", "a string", null, i);
-            list.Add(ReadString()!);
-        }
-        return list;
-    }
+    public List<string> Strings(string what, int index = -1) =>
+        Items(what, index).Select(i => Kind() == "string" ? ReadString()! : String(index < 0 ? what : $"{what}[{index}]", null, i)).ToList();
 
     /// <summary>Keys of an object keyed by node names, required strictly increasing (sorted, no duplicates).</summary>
     public IEnumerable<string> NodeMap(string what, string? owner = null)
@@ -330,8 +269,7 @@ public sealed class Json : IDisposable
     /// <summary>Requires strictly increasing ordinal order: sorted and free of duplicates.</summary>
     public static void SortedUnique(List<string> names, string what)
     {
-        for (var i = 1; i < names.Count; i++)
-            if (string.CompareOrdinal(names[i - 1], names[i]) >= 0) throw Unsorted(what, names[i], names[i - 1]);
+        for (var i = 1; i < names.Count; i++) if (string.CompareOrdinal(names[i - 1], names[i]) >= 0) throw Unsorted(what, names[i], names[i - 1]);
     }
 
     static InvalidCertificate Unsorted(string what, string name, string before) =>

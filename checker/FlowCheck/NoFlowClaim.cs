@@ -17,8 +17,7 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress)
         var blocked = new List<int>();
         foreach (var name in names)
         {
-            if (!g.Graph.Index.TryGetValue(name, out var v) || g.IsOutput(v))
-                throw new InvalidCertificate($"obstruction.blocked: {Json.Cut(name)} is not a measured node");
+            var v = g.Measured(name, "obstruction.blocked");
             blocked.Add(v);
             inU[v] = true;
         }
@@ -48,7 +47,7 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress)
     void CheckWitnesses(Json json, List<int> blocked)
     {
         var covered = new bool[g.Count];
-        var product = new Accumulator(g);
+        var product = new Dictionary<int, Rational>();
         foreach (var i in json.At("obstruction", "witnesses", "obstruction.witnesses").Items("obstruction.witnesses"))
         {
             var what = $"obstruction.witnesses[{i}]";
@@ -57,13 +56,12 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress)
                 var text = json.String(what, key);
                 if (!g.Graph.Index.TryGetValue(key, out var x) || !inU[x])
                     throw new InvalidCertificate($"{what}: entry on {Json.Cut(key)}, which is not in the blocked set");
-                var y = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
-                    $"{what}: y({key}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
+                var y = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate($"{what}: y({key}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
                 covered[x] = true;
                 foreach (var (w, a) in g.Neighbours(x).Where(e => IsCorrector(e.Node)))
-                    product.Add(w, g.Field.Mul(y, a));
+                    g.Add(product, w, g.Field.Mul(y, a));
             }
-            foreach (var w in product.Touched().Where(w => !product[w].Num.IsZero))
+            foreach (var w in product.Keys.Order().Where(w => !product[w].Num.IsZero))
                 throw new InvalidCertificate($"{what}: (y^T A)({g.Name(w)}) = {product[w].Show()} for corrector {g.Name(w)}, not 0");
             product.Clear();
             progress.Report("witnesses checked", i + 1, blocked.Count);

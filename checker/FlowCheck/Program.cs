@@ -28,18 +28,8 @@ public static class Program
             foreach (var line in lines) stdout.WriteLine(line);
             return 0;
         }
-        catch (InvalidCertificate e)
-        {
-            progress.Done();
-            stdout.WriteLine($"invalid: {OneLine(e.Message)}");
-            return 1;
-        }
-        catch (UnreadableInput e)
-        {
-            progress.Done();
-            stderr.WriteLine($"unreadable: {OneLine(e.Message)}");
-            return 2;
-        }
+        catch (InvalidCertificate e) { progress.Done(); stdout.WriteLine($"invalid: {OneLine(e.Message)}"); return 1; }
+        catch (UnreadableInput e) { progress.Done(); stderr.WriteLine($"unreadable: {OneLine(e.Message)}"); return 2; }
     }
 
     /// <summary>Control characters from the input (a newline in a name, say) are shown as \uXXXX escapes.</summary>
