@@ -40,7 +40,7 @@ public static class SolveCommand
         catch (WeightNotInFieldException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
         var solveSeconds = clock.Elapsed.TotalSeconds;
         clock.Restart();
-        if (outPath is not null) SafeFile.WriteAllText(outPath, CertificateWriter.Write(result), graphPath);
+        if (outPath is not null) SafeFile.Write(outPath, w => CertificateWriter.Write(result, w), graphPath);
         var writeSeconds = clock.Elapsed.TotalSeconds;
         if (json) WriteJson(stdout, result, parseSeconds, solveSeconds, writeSeconds);
         else Summary.Write(stdout, graphPath, result, outPath);
