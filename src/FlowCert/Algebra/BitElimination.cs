@@ -23,12 +23,13 @@ internal static class BitElimination
     /// <summary>Eliminates B over F_2: the reduced echelon form of [B | I].</summary>
     public static IEliminationResult<ulong> Run(IReadOnlyList<SparseVector<ulong>> rows)
     {
-        var ids = EchelonTransform<ulong>.ColumnIds(rows);
+        var index = EchelonTransform<ulong>.ColumnIndexOf(rows);
+        var ids = index.Ids;
         int m = rows.Count, n = ids.Length, w = n + m, s = (w + 63) >> 6;
         var a = new ulong[(long)m * s];
         for (int r = 0; r < m; r++)
         {
-            foreach (var c in rows[r].Indices) Set(a, (long)r * s, Array.BinarySearch(ids, c));
+            foreach (var c in rows[r].Indices) Set(a, (long)r * s, index.Of(c));
             Set(a, (long)r * s, n + r);
         }
         var pivots = Rref(a, m, w);
@@ -37,19 +38,33 @@ internal static class BitElimination
         var top = new SparseVector<ulong>[k];
         var kernel = new SparseVector<ulong>[m - k];
         var pivotIds = new int[k];
-        var idx = new List<int>();
+        var idx = new int[m];
         for (int r = 0; r < m; r++)
         {
-            idx.Clear();
-            for (int j = 0; j < m; j++) if (Get(a, (long)r * s, n + j)) idx.Add(j);
-            var v = new SparseVector<ulong>(idx.ToArray(), Enumerable.Repeat(1UL, idx.Count).ToArray());
+            // The set bits of the I part, word by word.
+            int count = 0;
+            long start = (long)r * s;
+            for (int j = n; j < w;)
+            {
+                ulong word = a[start + (j >> 6)] >> (j & 63);
+                int limit = Math.Min(64 - (j & 63), w - j);
+                if (limit < 64) word &= (1UL << limit) - 1;
+                while (word != 0)
+                {
+                    idx[count++] = j + BitOperations.TrailingZeroCount(word) - n;
+                    word &= word - 1;
+                }
+                j += limit;
+            }
+            var ones = new ulong[count];
+            Array.Fill(ones, 1UL);
+            var v = new SparseVector<ulong>(idx.AsSpan(0, count).ToArray(), ones);
             if (r < k) { top[r] = v; pivotIds[r] = ids[pivots[r]]; }
             else kernel[r - k] = v;
         }
         return new EchelonTransform<ulong>(m, pivotIds, top, kernel);
     }
 
-    private static bool Get(ulong[] a, long rowStart, int k) => (a[rowStart + (k >> 6)] >> (k & 63) & 1) != 0;
     private static void Set(ulong[] a, long rowStart, int k) => a[rowStart + (k >> 6)] |= 1UL << (k & 63);
 
     /// <summary>

@@ -41,7 +41,8 @@ internal static class MultiModularElimination
     /// <param name="primeCount">For tests: use this many primes instead of what the bound asks.</param>
     internal static EchelonTransform<Rational>? TryRun(IReadOnlyList<SparseVector<Rational>> rows, int? primeCount = null)
     {
-        var ids = EchelonTransform<Rational>.ColumnIds(rows);
+        var index = EchelonTransform<Rational>.ColumnIndexOf(rows);
+        var ids = index.Ids;
         int m = rows.Count, n = ids.Length, w = n + m;
         // Integer form: [L B | L I], L the least common multiple of the denominators.
         var l = BigInteger.One;
@@ -57,7 +58,7 @@ internal static class MultiModularElimination
             var sumSq = l * l;
             for (int q = 0; q < row.Count; q++)
             {
-                cols[r][q] = Array.BinarySearch(ids, row.Indices[q]);
+                cols[r][q] = index.Of(row.Indices[q]);
                 ints[r][q] = row.Values[q].Numerator * (l / row.Values[q].Denominator);
                 sumSq += ints[r][q] * ints[r][q];
             }
