@@ -64,67 +64,42 @@ internal static class MultiModularElimination
             }
             hadamardBits += (long)(sumSq.GetBitLength() + 1) / 2;
         }
-        // Numerators and denominators are minors, at most 2^hadamardBits: need M > 2 * 2^(2 hadamardBits).
+        // Numerators and denominators are minors, at most 2^hadamardBits, so M > 2^(2 hadamardBits + 1)
+        // always suffices; the actual sizes are usually far smaller, so start with few primes and double.
         int needed = primeCount ?? (int)((2 * hadamardBits + 2 + 60) / 61);
         var primes = new List<ulong>();
         var images = new List<ulong[]>();
         int[]? profile = null;
-        for (int t = 0; primes.Count < needed; t++)
+        int next = 0, target = primeCount ?? Math.Min(needed, 4);
+        BigInteger[][]? num;
+        BigInteger[] den = new BigInteger[m];
+        while (true)
         {
-            ulong p = Prime(t);
-            if (l % p == 0) continue;
-            var a = new ulong[(long)m * w];
-            ulong lp = (ulong)(l % p);
-            for (int r = 0; r < m; r++)
+            while (primes.Count < target)
             {
-                for (int q = 0; q < cols[r].Length; q++)
+                if (next > 4 * needed + 16) return null;
+                ulong p = Prime(next++);
+                if (l % p == 0) continue;
+                var a = new ulong[(long)m * w];
+                ulong lp = (ulong)(l % p);
+                for (int r = 0; r < m; r++)
                 {
-                    var v = (ulong)(ints[r][q] % p + p) % p;
-                    a[(long)r * w + cols[r][q]] = v;
+                    for (int q = 0; q < cols[r].Length; q++) a[(long)r * w + cols[r][q]] = Residue(ints[r][q], p);
+                    a[(long)r * w + n + r] = lp;
                 }
-                a[(long)r * w + n + r] = lp;
+                var piv = ModularElimination.Rref(p, a, m, w);
+                int cmp = profile is null ? -1 : Compare(piv, profile);
+                if (cmp > 0) continue; // p divides a minor: its pivots come later
+                if (cmp < 0) { profile = piv; primes.Clear(); images.Clear(); }
+                primes.Add(p);
+                images.Add(a);
             }
-            var piv = ModularElimination.Rref(p, a, m, w);
-            int cmp = profile is null ? -1 : Compare(piv, profile);
-            if (cmp > 0) continue; // p divides a minor: its pivots come later
-            if (cmp < 0) { profile = piv; primes.Clear(); images.Clear(); }
-            primes.Add(p);
-            images.Add(a);
-            if (t > 4 * needed + 16) return null;
+            num = Reconstruct(m, w, primes, images, den);
+            if (num is not null && Verify(m, n, profile!, num, den, cols, ints, l, ref next)) break;
+            if (primeCount is not null || target >= needed) return null;
+            target = Math.Min(needed, 2 * target);
         }
-        var crt = new Crt(primes);
         var pivots = profile!;
-        var num = new BigInteger[m][];
-        var den = new BigInteger[m];
-        var residues = new ulong[primes.Count];
-        for (int r = 0; r < m; r++)
-        {
-            var y = num[r] = new BigInteger[w];
-            var d = BigInteger.One;
-            var dmod = new ulong[primes.Count];
-            Array.Fill(dmod, 1UL);
-            for (int j = 0; j < w; j++)
-            {
-                long e = (long)r * w + j;
-                bool zero = true;
-                for (int t = 0; t < primes.Count; t++)
-                {
-                    residues[t] = Primality.MulMod(images[t][e], dmod[t], primes[t]);
-                    zero &= residues[t] == 0;
-                }
-                if (zero) continue;
-                var x = crt.Combine(residues);
-                if (BigInteger.Abs(x) <= crt.Bound) { y[j] = x; continue; }
-                if (crt.Reconstruct(x) is not var (nn, dd)) return null;
-                // The entry is nn / (d dd): every earlier numerator scales by dd.
-                for (int q = 0; q < j; q++) if (!y[q].IsZero) y[q] *= dd;
-                d *= dd;
-                for (int t = 0; t < primes.Count; t++) dmod[t] = (ulong)(d % primes[t]);
-                y[j] = nn;
-            }
-            den[r] = d;
-        }
-        if (!Verify(m, n, pivots, num, den, cols, ints, l)) return null;
         int k = 0;
         while (k < m && pivots[k] < n) k++;
         var top = new SparseVector<Rational>[k];
@@ -149,37 +124,109 @@ internal static class MultiModularElimination
         return b.Length.CompareTo(a.Length);
     }
 
+    private static ulong Residue(BigInteger v, ulong p)
+    {
+        var r = (ulong)BigInteger.Abs(v % p);
+        return v.Sign < 0 && r != 0 ? p - r : r;
+    }
+
     /// <summary>
-    /// The exact check: row r of [R | T] is num[r] / den[r]; R must be in reduced echelon form with the
-    /// given pivots (zero before its pivot, one at it, zero at the other pivots) and T (L B) = L R. Then T
-    /// is invertible and R is the reduced echelon form of B, which is unique.
+    /// Rows of [R | T] as integer numerators over one denominator per row, from their images modulo the
+    /// primes, or null when some entry has no reconstruction within the bound.
     /// </summary>
-    private static bool Verify(int m, int n, int[] pivots, BigInteger[][] num, BigInteger[] den, int[][] cols, BigInteger[][] ints, BigInteger l)
+    private static BigInteger[][]? Reconstruct(int m, int w, List<ulong> primes, List<ulong[]> images, BigInteger[] den)
+    {
+        var crt = new Crt(primes);
+        var num = new BigInteger[m][];
+        var residues = new ulong[primes.Count];
+        var dmod = new ulong[primes.Count];
+        var dq = new ulong[primes.Count];
+        for (int r = 0; r < m; r++)
+        {
+            var y = num[r] = new BigInteger[w];
+            var d = BigInteger.One;
+            for (int t = 0; t < primes.Count; t++) { dmod[t] = 1; dq[t] = Shoup.Quotient(1, primes[t]); }
+            for (int j = 0; j < w; j++)
+            {
+                long e = (long)r * w + j;
+                bool zero = true;
+                for (int t = 0; t < primes.Count; t++)
+                {
+                    residues[t] = Shoup.Multiply(dmod[t], dq[t], images[t][e], primes[t]);
+                    zero &= residues[t] == 0;
+                }
+                if (zero) continue;
+                var x = crt.Combine(residues);
+                if (BigInteger.Abs(x) <= crt.Bound) { y[j] = x; continue; }
+                if (crt.Reconstruct(x) is not var (nn, dd) || d * dd > crt.Bound) return null;
+                // The entry is nn / (d dd): every earlier numerator scales by dd.
+                for (int q = 0; q < j; q++) if (!y[q].IsZero) y[q] *= dd;
+                d *= dd;
+                for (int t = 0; t < primes.Count; t++) { dmod[t] = (ulong)(d % primes[t]); dq[t] = Shoup.Quotient(dmod[t], primes[t]); }
+                y[j] = nn;
+            }
+            den[r] = d;
+        }
+        return num;
+    }
+
+    /// <summary>
+    /// The exact check. Row r of [R | T] is num[r] / den[r]; R must be in reduced echelon form with the
+    /// given pivots (zero before its pivot, one at it, zero at the other pivots), and the integer matrix
+    /// E = T' (L B) - L R' (primes: numerators) must vanish. E is checked modulo fresh primes whose product
+    /// exceeds the bound (m max|L B| + L) max|num| on its entries, so E = 0 exactly (an integer smaller in
+    /// size than a multiple of it is zero; common practice). Then T B = R with T invertible, so R is the
+    /// reduced echelon form of B, which is unique, and T holds the canonical solutions and kernel.
+    /// </summary>
+    private static bool Verify(int m, int n, int[] pivots, BigInteger[][] num, BigInteger[] den, int[][] cols, BigInteger[][] ints, BigInteger l, ref int next)
     {
         if (pivots.Length != m) return false;
-        var acc = new BigInteger[n];
+        long maxBits = 0;
+        var maxB = BigInteger.Zero;
         for (int r = 0; r < m; r++)
         {
             var y = num[r];
             if (den[r].Sign <= 0 || y[pivots[r]] != den[r]) return false;
             for (int j = 0; j < pivots[r]; j++) if (!y[j].IsZero) return false;
             for (int q = 0; q < m; q++) if (q != r && !y[pivots[q]].IsZero) return false;
-            Array.Fill(acc, BigInteger.Zero);
+            foreach (var v in y) maxBits = Math.Max(maxBits, (long)BigInteger.Abs(v).GetBitLength());
+            foreach (var b in ints[r]) maxB = BigInteger.Max(maxB, BigInteger.Abs(b));
+        }
+        var bound = (m * maxB + l) << (int)maxBits;
+        var product = BigInteger.One;
+        int w = num[0].Length;
+        var yq = new ulong[w];
+        var acc = new ulong[n];
+        while (product <= bound)
+        {
+            ulong q = Prime(next++);
+            product *= q;
+            var bq = new ulong[m][];
             for (int i = 0; i < m; i++)
             {
-                var t = y[n + i];
-                if (t.IsZero) continue;
-                var ci = cols[i];
-                var bi = ints[i];
-                for (int q = 0; q < ci.Length; q++)
-                {
-                    var b = bi[q];
-                    if (b.IsOne) acc[ci[q]] += t;
-                    else if (b == BigInteger.MinusOne) acc[ci[q]] -= t;
-                    else acc[ci[q]] += t * b;
-                }
+                bq[i] = new ulong[ints[i].Length];
+                for (int k = 0; k < ints[i].Length; k++) bq[i][k] = Residue(ints[i][k], q);
             }
-            for (int j = 0; j < n; j++) if (acc[j] != l * y[j]) return false;
+            ulong lq = Residue(l, q), lqq = Shoup.Quotient(lq, q);
+            for (int r = 0; r < m; r++)
+            {
+                for (int j = 0; j < w; j++) yq[j] = num[r][j].IsZero ? 0 : Residue(num[r][j], q);
+                Array.Clear(acc);
+                for (int i = 0; i < m; i++)
+                {
+                    ulong t = yq[n + i];
+                    if (t == 0) continue;
+                    ulong tq = Shoup.Quotient(t, q);
+                    var ci = cols[i];
+                    var bi = bq[i];
+                    for (int k = 0; k < ci.Length; k++)
+                    {
+                        ulong s = acc[ci[k]] + Shoup.Multiply(t, tq, bi[k], q);
+                        acc[ci[k]] = Math.Min(s, s - q);
+                    }
+                }
+                for (int j = 0; j < n; j++) if (acc[j] != Shoup.Multiply(lq, lqq, yq[j], q)) return false;
+            }
         }
         return true;
     }
@@ -188,7 +235,8 @@ internal static class MultiModularElimination
     private sealed class Crt
     {
         private readonly ulong[] p;
-        private readonly ulong[,] inverse; // inverse[t, 0] = (p_0 ... p_{t-1})^-1 mod p_t
+        private readonly ulong[] inverse, inverseQ; // (p_0 ... p_{t-1})^-1 mod p_t and its Shoup quotient
+        private readonly ulong[,] radix, radixQ;     // p_j mod p_t and its Shoup quotient, j < t
         private readonly ulong[] digits, limbs;
         public BigInteger Modulus { get; }
         /// <summary>floor(sqrt(M / 2)): numerators and denominators up to this are reconstructed uniquely.</summary>
@@ -199,12 +247,21 @@ internal static class MultiModularElimination
         {
             p = primes.ToArray();
             int k = p.Length;
-            inverse = new ulong[k, 1];
+            inverse = new ulong[k];
+            inverseQ = new ulong[k];
+            radix = new ulong[k, k];
+            radixQ = new ulong[k, k];
             for (int t = 0; t < k; t++)
             {
                 ulong prod = 1;
-                for (int j = 0; j < t; j++) prod = Primality.MulMod(prod, p[j] % p[t], p[t]);
-                inverse[t, 0] = new PrimeField(p[t]).Inverse(prod);
+                for (int j = 0; j < t; j++)
+                {
+                    radix[t, j] = p[j] % p[t];
+                    radixQ[t, j] = Shoup.Quotient(radix[t, j], p[t]);
+                    prod = Primality.MulMod(prod, radix[t, j], p[t]);
+                }
+                inverse[t] = new PrimeField(p[t]).Inverse(prod);
+                inverseQ[t] = Shoup.Quotient(inverse[t], p[t]);
             }
             digits = new ulong[k];
             limbs = new ulong[k + 1];
@@ -223,9 +280,15 @@ internal static class MultiModularElimination
             {
                 ulong pt = p[t];
                 ulong acc = 0; // v_0 + p_0 (v_1 + p_1 (...)) mod p_t, by Horner from the top digit
-                for (int j = t - 1; j >= 0; j--) acc = (ulong)(((UInt128)acc * (p[j] % pt) + digits[j]) % pt);
+                for (int j = t - 1; j >= 0; j--)
+                {
+                    // Every prime lies in (2^61, 2^62), so a digit below p_j is below 2 p_t.
+                    ulong d = Math.Min(digits[j], digits[j] - pt);
+                    acc = Shoup.Multiply(radix[t, j], radixQ[t, j], acc, pt) + d;
+                    acc = Math.Min(acc, acc - pt);
+                }
                 ulong diff = r[t] >= acc ? r[t] - acc : r[t] + pt - acc;
-                digits[t] = Primality.MulMod(diff, inverse[t, 0], pt);
+                digits[t] = Shoup.Multiply(inverse[t], inverseQ[t], diff, pt);
             }
             Array.Clear(limbs);
             int used = 1;
@@ -272,5 +335,19 @@ internal static class MultiModularElimination
                 x = y;
             }
         }
+    }
+}
+
+/// <summary>Multiplication by a fixed residue with a precomputed quotient (Shoup's method, common practice).</summary>
+internal static class Shoup
+{
+    /// <summary>floor(c 2^64 / p) for c below p.</summary>
+    public static ulong Quotient(ulong c, ulong p) => (ulong)(((UInt128)c << 64) / p);
+
+    /// <summary>c y mod p for c below p and p below 2^63, given q = Quotient(c, p).</summary>
+    public static ulong Multiply(ulong c, ulong q, ulong y, ulong p)
+    {
+        ulong r = c * y - Math.BigMul(q, y, out _) * p;
+        return Math.Min(r, r - p);
     }
 }
