@@ -35,6 +35,6 @@ public readonly struct BinaryField : IField<ulong>
     public bool TryParse(string text, out ulong value) => Two.TryParse(text, out value);
 
     /// <inheritdoc/>
-    public IEliminationResult<ulong> Eliminate(IReadOnlyList<SparseVector<ulong>> rows)
+    IEliminationResult<ulong> IField<ulong>.Eliminate(IReadOnlyList<SparseVector<ulong>> rows)
         => BitElimination.PaysOff(rows) ? BitElimination.Run(rows) : new SparseElimination<ulong, BinaryField>(this, rows);
 }

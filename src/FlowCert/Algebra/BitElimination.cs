@@ -5,7 +5,7 @@ using System.Runtime.Intrinsics;
 namespace FlowCert.Algebra;
 
 /// <summary>
-/// Dense elimination over F_2 (<see cref="BinaryField.Eliminate"/>): [B | I] with rows packed 64 entries
+/// Dense elimination over F_2 (<see cref="IField{T}.Eliminate"/> of <see cref="BinaryField"/>): [B | I] with rows packed 64 entries
 /// to a word in one array, brought to reduced echelon form. Pivots are found a few at a time; the pivot
 /// rows of a group are reduced among themselves, every combination of them is tabulated once (Gray code
 /// order, one XOR per table entry), and each other row then takes one table lookup and one XOR per group

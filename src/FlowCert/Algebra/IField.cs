@@ -35,9 +35,10 @@ public interface IField<T> where T : struct
     /// <summary>
     /// Eliminates a block B (one sparse row per entry) with this field's kernel: sparse rows for sparse
     /// blocks; for dense ones packed bits over F_2, word-sized residues over F_p, several primes over Q.
-    /// Every kernel gives the same canonical solutions (<see cref="IEliminationResult{T}"/>).
+    /// Every kernel gives the same canonical solutions (<see cref="IEliminationResult{T}"/>). Internal:
+    /// only the library's own fields implement it.
     /// </summary>
-    IEliminationResult<T> Eliminate(IReadOnlyList<SparseVector<T>> rows);
+    internal IEliminationResult<T> Eliminate(IReadOnlyList<SparseVector<T>> rows);
 }
 
 /// <summary>A rational that has no image in the field (its denominator is divisible by p).</summary>

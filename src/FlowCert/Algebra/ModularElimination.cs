@@ -7,7 +7,7 @@ namespace FlowCert.Algebra;
 
 /// <summary>
 /// Dense Gauss-Jordan elimination over F_p (p below 2^62) on a row-major array of residues: the kernel
-/// for dense blocks over F_p (<see cref="PrimeField.Eliminate"/>) and for each prime of the multi-modular
+/// for dense blocks over F_p (<see cref="IField{T}.Eliminate"/> of <see cref="PrimeField"/>) and for each prime of the multi-modular
 /// kernel over Q. Small primes use delayed reduction: while (p-1)^2 (m+1) + p fits in 64 bits a row
 /// update is a plain multiply-add (four lanes at a time with AVX2) and entries are reduced only when read
 /// as a pivot or multiplier. Larger primes multiply with a precomputed quotient per factor (Shoup's

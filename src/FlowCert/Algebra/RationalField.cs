@@ -30,6 +30,6 @@ public readonly struct RationalField : IField<Rational>
         => Rational.TryParse(text, out value) && value.ToString() == text;
 
     /// <inheritdoc/>
-    public IEliminationResult<Rational> Eliminate(IReadOnlyList<SparseVector<Rational>> rows)
+    IEliminationResult<Rational> IField<Rational>.Eliminate(IReadOnlyList<SparseVector<Rational>> rows)
         => ModularElimination.PaysOff(rows) ? MultiModularElimination.Run(rows) : new SparseElimination<Rational, RationalField>(this, rows);
 }
