@@ -97,4 +97,23 @@ public static class KernelRunner
             return (times[times.Count / 2], rank);
         }
     }
+
+    /// <summary>Times FlowSolver.Solve (generalized flow) on a band graph: prints "median-seconds depth".</summary>
+    public static void TimeBand(int n, int bandwidth, string fieldName, int reps)
+    {
+        var graph = Workloads.Band(n, bandwidth);
+        var field = FieldSpec.Parse(fieldName);
+        var times = new List<double>();
+        int depth = 0;
+        for (int r = 0; r < reps + 1; r++)
+        {
+            var sw = Stopwatch.StartNew();
+            var result = FlowCert.Flows.FlowSolver.Solve(graph, field, FlowCert.Flows.FlowKind.General);
+            sw.Stop();
+            depth = result.HasFlow ? result.Depth : -1;
+            if (r > 0) times.Add(sw.Elapsed.TotalSeconds);
+        }
+        times.Sort();
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{times[times.Count / 2]:F6} {depth}"));
+    }
 }

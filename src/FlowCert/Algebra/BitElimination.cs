@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
@@ -21,6 +22,7 @@ internal static class BitElimination
     public static bool PaysOff(IReadOnlyList<SparseVector<ulong>> rows) => EchelonTransform<ulong>.PaysOff(rows, 4, 64);
 
     /// <summary>Eliminates B over F_2: the reduced echelon form of [B | I].</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     public static IEliminationResult<ulong> Run(IReadOnlyList<SparseVector<ulong>> rows)
     {
         var index = EchelonTransform<ulong>.ColumnIndexOf(rows);
@@ -71,6 +73,7 @@ internal static class BitElimination
     /// Brings the m x w packed matrix (rows of ceil(w/64) words) to reduced row echelon form in place,
     /// columns left to right; returns the pivot column of each non-zero row, in order.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     public static int[] Rref(ulong[] a, int m, int w)
     {
         int s = (w + 63) >> 6;
@@ -134,6 +137,7 @@ internal static class BitElimination
     private static Span<ulong> Row(ulong[] a, int i, int s, int fromWord)
         => a.AsSpan((int)((long)i * s + fromWord), s - fromWord);
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void Xor(Span<ulong> target, ReadOnlySpan<ulong> source)
     {
         int j = 0;

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 namespace FlowCert.Algebra;
 
 /// <summary>
@@ -72,6 +73,7 @@ internal sealed class EchelonTransform<T> : IEliminationResult<T> where T : stru
     public IReadOnlyList<SparseVector<T>> LeftKernel() => kernel;
 
     /// <inheritdoc/>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     public Dictionary<int, SparseVector<T>> SolveUnitVectors()
     {
         var blocked = new bool[m];

@@ -66,6 +66,7 @@ internal static class ModularElimination
     /// receives the whole panel in one pass (one read and write of the row per panel instead of per pivot;
     /// products summed in 64 or 128 bits and reduced once).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     public static int[] Rref(ulong p, ulong[] a, int m, int w)
     {
         // Each row receives every pivot at most twice (once while examined, once in its panel's pass).
@@ -143,6 +144,7 @@ internal static class ModularElimination
     private static Span<ulong> Row(ulong[] a, int i, int w, int from) => a.AsSpan((int)((long)i * w + from), w - from);
 
     /// <summary>target += sum_g factors[g] * (pivot row g), unreduced, four lanes at a time with AVX2.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void PanelLazy(Span<ulong> target, ulong[] a, int first, int found, int w, int from, ulong[] factors)
     {
         int len = target.Length, j = 0;
@@ -170,6 +172,7 @@ internal static class ModularElimination
     }
 
     /// <summary>target = target + sum_g factors[g] * (pivot row g) mod p: products summed in 128 bits, one reduction per entry.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void PanelWide(Span<ulong> target, ulong[] a, int first, int found, int w, int from, ulong[] factors, WideReducer wide)
     {
         for (int j = 0; j < target.Length; j++)
@@ -210,6 +213,7 @@ internal static class ModularElimination
     }
 
     /// <summary>target += factor * source without reduction (factor and source below 2^32).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void AddMulLazy(Span<ulong> target, ReadOnlySpan<ulong> source, ulong factor)
     {
         int j = 0;
@@ -228,6 +232,7 @@ internal static class ModularElimination
     }
 
     /// <summary>target = target + factor * source mod p, all entries below p.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void AddMulShoup(Span<ulong> target, ReadOnlySpan<ulong> source, ulong factor, ulong p)
     {
         ulong fq = (ulong)(((UInt128)factor << 64) / p);
@@ -243,6 +248,7 @@ internal static class ModularElimination
     }
 
     /// <summary>row = factor * row mod p, entries below p.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void ScaleShoup(Span<ulong> row, ulong factor, ulong p)
     {
         ulong fq = (ulong)(((UInt128)factor << 64) / p);

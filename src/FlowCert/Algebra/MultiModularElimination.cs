@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Numerics;
 using System.Runtime.InteropServices;
 
@@ -134,6 +135,7 @@ internal static class MultiModularElimination
     /// Rows of [R | T] as integer numerators over one denominator per row, from their images modulo the
     /// primes, or null when some entry has no reconstruction within the bound.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static BigInteger[][]? Reconstruct(int m, int w, List<ulong> primes, List<ulong[]> images, BigInteger[] den)
     {
         var crt = new Crt(primes);
@@ -178,6 +180,7 @@ internal static class MultiModularElimination
     /// size than a multiple of it is zero; common practice). Then T B = R with T invertible, so R is the
     /// reduced echelon form of B, which is unique, and T holds the canonical solutions and kernel.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static bool Verify(int m, int n, int[] pivots, BigInteger[][] num, BigInteger[] den, int[][] cols, BigInteger[][] ints, BigInteger l, ref int next)
     {
         if (pivots.Length != m) return false;
@@ -273,6 +276,7 @@ internal static class MultiModularElimination
         }
 
         /// <summary>The integer in (-M/2, M/2] with the given residues.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
         public BigInteger Combine(ulong[] r)
         {
             int k = p.Length;
