@@ -33,6 +33,19 @@ internal static class MultiModularElimination
         }
     }
 
+    /// <summary>
+    /// True when the block is dense enough for this kernel: the word-sized test of the F_p kernel and at
+    /// least a third of the m x n entries non-zero. Sparser blocks (such as the triangular blocks of a band
+    /// graph) keep their structure under exact elimination, which then beats this kernel (bench/layers).
+    /// </summary>
+    public static bool PaysOff(IReadOnlyList<SparseVector<Rational>> rows)
+    {
+        if (!ModularElimination.PaysOff(rows)) return false;
+        long entries = 0;
+        foreach (var r in rows) entries += r.Count;
+        return 3 * entries >= (long)rows.Count * EchelonTransform<Rational>.ColumnIndexOf(rows).Ids.Length;
+    }
+
     /// <summary>Eliminates B over Q: verified multi-modular, or exact when verification fails.</summary>
     public static IEliminationResult<Rational> Run(IReadOnlyList<SparseVector<Rational>> rows)
         => (IEliminationResult<Rational>?)TryRun(rows) ?? new SparseElimination<Rational, RationalField>(default, rows);

@@ -31,5 +31,5 @@ public readonly struct RationalField : IField<Rational>
 
     /// <inheritdoc/>
     IEliminationResult<Rational> IField<Rational>.Eliminate(IReadOnlyList<SparseVector<Rational>> rows)
-        => ModularElimination.PaysOff(rows) ? MultiModularElimination.Run(rows) : new SparseElimination<Rational, RationalField>(this, rows);
+        => MultiModularElimination.PaysOff(rows) ? MultiModularElimination.Run(rows) : new SparseElimination<Rational, RationalField>(this, rows);
 }
