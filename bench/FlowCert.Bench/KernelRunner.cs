@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using System.Runtime.InteropServices;
 using FlowCert.Algebra;
 
 namespace FlowCert.Bench;
@@ -7,11 +8,35 @@ namespace FlowCert.Bench;
 /// <summary>
 /// The C# side of <c>bench/compare</c>: writes seeded random matrices as Matrix Market files (the same
 /// files the anchor program reads) and times the solver's elimination kernel on one of them with a
-/// stopwatch, printing the median of several runs. Timed: the block elimination as the flow search runs it
+/// clock (<see cref="Clock"/>), printing the median of several runs. Timed: the block elimination as the flow search runs it
 /// (<see cref="Elimination.Run"/>, then the unit-vector solutions and the left kernel).
 /// </summary>
 public static class KernelRunner
 {
+    /// <summary>
+    /// The clock of every timing here and in the anchor program: the calling thread's CPU time
+    /// (clock_gettime with CLOCK_THREAD_CPUTIME_ID), or wall-clock time when FLOWCERT_CLOCK=wall. On a
+    /// shared, busy machine wall-clock time of a run of a few milliseconds is mostly time spent waiting
+    /// for a core, and longer runs wait more often, which distorts ratios; CPU time does not wait.
+    /// </summary>
+    private static class Clock
+    {
+        private static readonly bool Wall = Environment.GetEnvironmentVariable("FLOWCERT_CLOCK") == "wall";
+
+        [StructLayout(LayoutKind.Sequential)]
+        private struct Timespec { public long Seconds, Nanoseconds; }
+
+        [DllImport("libc", EntryPoint = "clock_gettime")]
+        private static extern int ClockGetTime(int clock, out Timespec t);
+
+        public static double Now()
+        {
+            if (Wall || !OperatingSystem.IsLinux()) return Stopwatch.GetTimestamp() / (double)Stopwatch.Frequency;
+            ClockGetTime(3, out var t); // CLOCK_THREAD_CPUTIME_ID
+            return t.Seconds + t.Nanoseconds * 1e-9;
+        }
+    }
+
     /// <summary>The shapes of issue 11: (file stem, field, rows, columns).</summary>
     public static readonly (string Name, string Field, int Rows, int Columns)[] Shapes =
     [
@@ -60,12 +85,60 @@ public static class KernelRunner
         return (rows, cols, entries);
     }
 
-    /// <summary>Times the kernel on one file: prints "median-seconds rank".</summary>
+    /// <summary>
+    /// Times the kernel on one file: prints "median-seconds rref-median-seconds rank", the first for the
+    /// block elimination as the solver runs it, the second for the reduced echelon form of [B | I] alone
+    /// on the kernel's own array (what the anchor's [B | I] column does; over Q the whole multi-modular run).
+    /// </summary>
     public static void Time(string fieldName, string file, int reps)
     {
         var (rows, _, entries) = Read(file);
         var (seconds, rank) = FieldSpec.Parse(fieldName).Accept(new Timer(rows, entries, reps));
-        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{seconds:F6} {rank}"));
+        var rref = FieldSpec.Parse(fieldName).Accept(new RrefTimer(rows, entries, reps));
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{seconds:F6} {rref:F6} {rank}"));
+    }
+
+    private sealed class RrefTimer(int rows, List<(int I, int J, long V)> entries, int reps) : IFieldVisitor<double>
+    {
+        public double Visit<T, TField>(TField f) where T : struct where TField : struct, IField<T>
+        {
+            int n = entries.Count == 0 ? 0 : entries.Max(e => e.J) + 1, w = n + rows;
+            var times = new List<double>();
+            for (int r = 0; r < reps + 1; r++)
+            {
+                double t0;
+                if (f is BinaryField)
+                {
+                    int s = (w + 63) >> 6;
+                    var a = new ulong[rows * s];
+                    foreach (var (i, j, v) in entries) if ((v & 1) != 0) a[i * s + (j >> 6)] |= 1UL << (j & 63);
+                    for (int i = 0; i < rows; i++) a[i * s + ((n + i) >> 6)] |= 1UL << ((n + i) & 63);
+                    t0 = Clock.Now();
+                    BitElimination.Rref(a, rows, w);
+                }
+                else if (f is PrimeField pf)
+                {
+                    var a = new ulong[rows * w];
+                    foreach (var (i, j, v) in entries) a[i * w + j] = pf.FromRational(v);
+                    for (int i = 0; i < rows; i++) a[i * w + n + i] = 1;
+                    t0 = Clock.Now();
+                    ModularElimination.Rref(pf.P, a, rows, w);
+                }
+                else
+                {
+                    var lists = new List<(int, Rational)>[rows];
+                    for (int i = 0; i < rows; i++) lists[i] = [];
+                    foreach (var (i, j, v) in entries) lists[i].Add((j, v));
+                    var matrix = lists.Select(l => new SparseVector<Rational>(l.Select(e => e.Item1).ToArray(), l.Select(e => e.Item2).ToArray())).ToList();
+                    t0 = Clock.Now();
+                    _ = MultiModularElimination.TryRun(matrix);
+                }
+                double t1 = Clock.Now();
+                if (r > 0) times.Add(t1 - t0);
+            }
+            times.Sort();
+            return times[times.Count / 2];
+        }
     }
 
     private sealed class Timer(int rows, List<(int I, int J, long V)> entries, int reps) : IFieldVisitor<(double, int)>
@@ -84,14 +157,14 @@ public static class KernelRunner
             int rank = 0;
             for (int r = 0; r < reps + 1; r++)
             {
-                var sw = Stopwatch.StartNew();
+                double t0 = Clock.Now();
                 var e = Elimination.Run(f, matrix);
                 var solutions = e.SolveUnitVectors();
                 var kernel = e.LeftKernel();
-                sw.Stop();
+                double t1 = Clock.Now();
                 rank = e.Rank;
                 if (solutions.Count + kernel.Count < 0) throw new InvalidOperationException();
-                if (r > 0) times.Add(sw.Elapsed.TotalSeconds); // the first run warms the JIT up
+                if (r > 0) times.Add(t1 - t0); // the first run warms the JIT up
             }
             times.Sort();
             return (times[times.Count / 2], rank);
@@ -107,11 +180,11 @@ public static class KernelRunner
         int depth = 0;
         for (int r = 0; r < reps + 1; r++)
         {
-            var sw = Stopwatch.StartNew();
+            double t0 = Clock.Now();
             var result = FlowCert.Flows.FlowSolver.Solve(graph, field, FlowCert.Flows.FlowKind.General);
-            sw.Stop();
+            double t1 = Clock.Now();
             depth = result.HasFlow ? result.Depth : -1;
-            if (r > 0) times.Add(sw.Elapsed.TotalSeconds);
+            if (r > 0) times.Add(t1 - t0);
         }
         times.Sort();
         Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{times[times.Count / 2]:F6} {depth}"));
