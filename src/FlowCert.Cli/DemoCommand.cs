@@ -47,6 +47,8 @@ public static class DemoCommand
             }
             o.WriteLine();
         }
+        o.Write(NoiseScene.Text());
+        o.WriteLine();
         o.WriteLine($"{written} certificates written to {outDir}/ ; check one with: dotnet run --project checker/FlowCheck -- {outDir}/splitter-pair.Q.general.json");
         return ExitCode.Flow;
     }
