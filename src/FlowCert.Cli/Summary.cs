@@ -19,7 +19,7 @@ public static class Summary
             return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
         }
         o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
-        o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
+        o.WriteLine($"field     {r.Field.Name}    flow: {FlowKinds.Name(r.Kind)}");
         if (r.VanishedEdges.Count > 0)
             o.WriteLine("warning   " + VanishingEdges.Warning(g, r.Field, r.VanishedEdges));
         if (r.Obstruction is { } blocked)

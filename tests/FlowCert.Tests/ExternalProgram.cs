@@ -25,11 +25,12 @@ public static class ExternalProgram
         Process process;
         try
         {
+            if (DebianTools.IsHidden(program)) throw new System.ComponentModel.Win32Exception($"hidden by FLOWCERT_TEST_HIDE_PROGRAMS");
             process = Process.Start(info) ?? throw new InvalidOperationException($"could not start {program}");
         }
         catch (System.ComponentModel.Win32Exception e)
         {
-            Assert.Fail($"the program '{program}' is needed by this test and could not be started ({e.Message}): install the Debian package '{debianPackage}'");
+            Assert.Fail($"the program '{program}' is needed by this test and could not be started ({e.Message}): install the Debian package '{debianPackage}' (apt-get install {debianPackage})");
             throw; // unreachable
         }
         using (process)

@@ -100,7 +100,18 @@ public static class CertificateReader
         NodeVector Vector(JToken t, string what)
         {
             if (t is not JObject o) throw Bad(t, $"{what} must be an object");
-            return new NodeVector(o.Properties().Select(p => (Key(p), Str(p.Value, what))).OrderBy(x => x.Item1).ToList());
+            var props = o.Properties().ToList();
+            var nodes = props.Select(Key).ToArray();
+            string Text(JProperty p) => Str(p.Value, what);
+            Exception NotCanonical(JProperty p) => Bad(p.Value,
+                $"{what}: '{Excerpt.Of(Text(p))}' on {Excerpt.Of(p.Name)} is not an element of {field.Name} in canonical form");
+            if (field.IsRationals)
+            {
+                var q = default(RationalField);
+                return NodeVector.Create(field, nodes, props.Select(p => q.TryParse(Text(p), out var x) ? x : throw NotCanonical(p)).ToArray());
+            }
+            var fp = new PrimeField(field.Prime);
+            return NodeVector.Create(field, nodes, props.Select(p => fp.TryParse(Text(p), out var x) ? x : throw NotCanonical(p)).ToArray());
         }
 
         var rounds = new List<IReadOnlyList<int>>();

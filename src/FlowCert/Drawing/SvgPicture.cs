@@ -113,8 +113,8 @@ public static class SvgPicture
             {
                 var (path, lx, ly) = CurvedArrow(p.X[v], p.Y[v], p.X[u], p.Y[u]);
                 s.Append($"<path d=\"{path}\"/>\n");
-                if (p.ShowLabels && value != "1")
-                    labels.Append($"<text x=\"{F(lx)}\" y=\"{F(ly)}\">{Escape(value)}</text>\n");
+                if (p.ShowLabels && !value.IsOne)
+                    labels.Append($"<text x=\"{F(lx)}\" y=\"{F(ly)}\">{Escape(value.ToString())}</text>\n");
             }
         s.Append("</g>\n");
         if (labels.Length > 0)

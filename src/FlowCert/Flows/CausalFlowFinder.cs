@@ -26,6 +26,6 @@ internal static class CausalFlowFinder
         }
         if (chosen.Count == 0) return LayerOutcome.Stuck(new BlockedSet(state.Unprocessed(), []));
         return LayerOutcome.Found(chosen.ToDictionary(
-            p => p.Key, p => LayeredSearch.ToNodeVector(g.Field, [p.Value], [g.Field.Inverse(g.Weight(p.Key, p.Value))])));
+            p => p.Key, p => LayeredSearch.ToNodeVector(g, [p.Value], [g.Field.Inverse(g.Weight(p.Key, p.Value))])));
     }
 }

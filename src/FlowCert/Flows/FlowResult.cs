@@ -29,9 +29,6 @@ public static class FlowKinds
     }
 }
 
-/// <summary>A sparse vector over nodes with canonical field-element text, entries sorted by node index.</summary>
-public sealed record NodeVector(IReadOnlyList<(int Node, string Value)> Entries);
-
 /// <summary>A proof that no flow exists: a blocked set and, for generalized flow, left-kernel witnesses.</summary>
 public sealed record BlockedSet(IReadOnlyList<int> Nodes, IReadOnlyList<NodeVector> Witnesses);
 

@@ -38,7 +38,7 @@ internal static class GeneralFlowFinder
         var solutions = elimination.SolveUnitVectors();
         if (solutions.Count == 0)
             return LayerOutcome.Stuck(Obstruction(g, state.Unprocessed(), rows, elimination));
-        return LayerOutcome.Found(solutions.ToDictionary(s => rows[s.Key], s => LayeredSearch.ToNodeVector(f, s.Value.Indices, s.Value.Values)));
+        return LayerOutcome.Found(solutions.ToDictionary(s => rows[s.Key], s => LayeredSearch.ToNodeVector(g, s.Value.Indices, s.Value.Values)));
     }
 
     /// <summary>
@@ -54,13 +54,13 @@ internal static class GeneralFlowFinder
         var onFrontier = new HashSet<int>(rows);
         var isolated = blocked.Where(v => !onFrontier.Contains(v)).ToArray();
         if (isolated.Length > 0)
-            witnesses.Add(LayeredSearch.ToNodeVector(f, isolated, isolated.Select(_ => f.One).ToArray()));
+            witnesses.Add(LayeredSearch.ToNodeVector(g, isolated, isolated.Select(_ => f.One).ToArray()));
         var covered = new HashSet<int>(isolated);
         foreach (var y in new SparseElimination<T, TField>(f, elimination.LeftKernel()).ReducedRows())
         {
             var nodes = y.Indices.Select(r => rows[r]).ToArray();
             if (nodes.All(covered.Contains)) continue;
-            witnesses.Add(LayeredSearch.ToNodeVector(f, nodes, y.Values));
+            witnesses.Add(LayeredSearch.ToNodeVector(g, nodes, y.Values));
             covered.UnionWith(nodes);
         }
         return new BlockedSet(blocked, witnesses);

@@ -44,8 +44,8 @@ internal static class LayeredSearch
         };
     }
 
-    /// <summary>A node vector from parallel arrays, entries sorted by node, values in canonical text.</summary>
-    public static NodeVector ToNodeVector<T, TField>(TField f, IReadOnlyList<int> nodes, IReadOnlyList<T> values)
+    /// <summary>A node vector of the graph's field from parallel arrays (any order).</summary>
+    public static NodeVector ToNodeVector<T, TField>(FieldGraph<T, TField> g, IReadOnlyList<int> nodes, IReadOnlyList<T> values)
         where T : struct where TField : struct, IField<T>
-        => new(nodes.Zip(values).Select(p => (p.First, f.Format(p.Second))).OrderBy(p => p.Item1).ToList());
+        => NodeVector.Create(g.Spec, nodes, values);
 }

@@ -9,9 +9,9 @@ public sealed class ScheduleException(string message) : Exception(message);
 /// <summary>
 /// The correction vectors of a flow result parsed into a field, with A c_v computed there, and the round
 /// of every node. Checks the shape (rounds partition the measured nodes, one parsable correction vector
-/// per measured node), not the flow conditions: see <see cref="FlowConditionCheck"/>.
+/// per measured node), not the flow conditions (the certificate reader has already checked that every value is a canonical element of the field): see <see cref="FlowConditionCheck"/>.
 /// </summary>
-public sealed class CorrectionSystem<T, TField> where T : struct where TField : struct, IField<T>
+internal sealed class CorrectionSystem<T, TField> where T : struct where TField : struct, IField<T>
 {
     /// <summary>The graph with its weights in the field.</summary>
     public FieldGraph<T, TField> Graph { get; }
@@ -63,12 +63,11 @@ public sealed class CorrectionSystem<T, TField> where T : struct where TField : 
             if (!r.Corrections.TryGetValue(v, out var vector)) throw new ScheduleException($"measured node {g.Names[v]} has no correction vector");
             var idx = new List<int>();
             var val = new List<T>();
-            foreach (var (u, text) in vector.Entries)
+            var values = vector.Values<T>();
+            for (int k = 0; k < vector.Count; k++)
             {
-                if (!field.TryParse(text, out var x))
-                    throw new ScheduleException($"correction of {g.Names[v]}: '{text}' on {g.Names[u]} is not an element of {r.Field.Name} in canonical form");
-                if (field.IsZero(x)) continue;
-                idx.Add(u); val.Add(x);
+                if (field.IsZero(values[k])) continue;
+                idx.Add(vector.Nodes[k]); val.Add(values[k]);
             }
             var cv = new SparseVector<T>(idx.ToArray(), val.ToArray());
             c[v] = cv;

@@ -6,10 +6,10 @@ namespace FlowCert.Schedules;
 
 /// <summary>
 /// A linear form sum_v Coefficient_v * m_v in the outcomes m_v of earlier measurements, m_v being the
-/// outcome of v as re-read through its own frame (raw outcome minus b_v). Coefficients are canonical
-/// field text; terms are ordered by (round of v, v) and none is zero.
+/// outcome of v as re-read through its own frame (raw outcome minus b_v). Coefficients are field
+/// elements; terms are ordered by (round of v, v) and none is zero.
 /// </summary>
-public sealed record LinearForm(IReadOnlyList<(int Node, string Coefficient)> Terms)
+public sealed record LinearForm(IReadOnlyList<(int Node, FieldElement Coefficient)> Terms)
 {
     /// <summary>True when the form has no terms (it is 0).</summary>
     public bool IsZero => Terms.Count == 0;
@@ -17,9 +17,9 @@ public sealed record LinearForm(IReadOnlyList<(int Node, string Coefficient)> Te
 
 /// <summary>
 /// What outcome m of <see cref="Source"/> asks of <see cref="Target"/>: the correction X^(X m) Z^(Z m),
-/// with X = -c_v(u) and Z = -(A c_v)(u) as canonical field text (flows.md section 7).
+/// with X = -c_v(u) and Z = -(A c_v)(u) (flows.md section 7).
 /// </summary>
-public sealed record TriggeredCorrection(int Source, int Target, string X, string Z);
+public sealed record TriggeredCorrection(int Source, int Target, FieldElement X, FieldElement Z);
 
 /// <summary>
 /// The Pauli frame of a node w when it is measured (or, for an output, after the last round): the state

@@ -29,8 +29,9 @@ public static class ScheduleBuilder
             var g = r.Graph;
 
             // Per target w: the (source, coefficient) terms of a_w and b_w, sources in measurement order.
-            var xTerms = new List<(int, string)>[g.NodeCount];
-            var zTerms = new List<(int, string)>[g.NodeCount];
+            var xTerms = new List<(int, FieldElement)>[g.NodeCount];
+            var zTerms = new List<(int, FieldElement)>[g.NodeCount];
+            FieldElement E(T x) => FieldElement.Of(r.Field, x);
             for (int w = 0; w < g.NodeCount; w++) { xTerms[w] = []; zTerms[w] = []; }
             var corrections = new List<TriggeredCorrection>();
             foreach (var v in s.Order)
@@ -41,9 +42,9 @@ public static class ScheduleBuilder
                 foreach (var w in targets)
                 {
                     T cx = c.Get(f, w), cz = image.Get(f, w);
-                    corrections.Add(new TriggeredCorrection(v, w, f.Format(f.Negate(cx)), f.Format(f.Negate(cz))));
-                    if (!f.IsZero(cx)) xTerms[w].Add((v, f.Format(cx)));
-                    if (!f.IsZero(cz)) zTerms[w].Add((v, f.Format(cz)));
+                    corrections.Add(new TriggeredCorrection(v, w, E(f.Negate(cx)), E(f.Negate(cz))));
+                    if (!f.IsZero(cx)) xTerms[w].Add((v, E(cx)));
+                    if (!f.IsZero(cz)) zTerms[w].Add((v, E(cz)));
                 }
             }
             var frames = new List<NodeFrame>();
@@ -54,7 +55,7 @@ public static class ScheduleBuilder
                 Graph = g, Field = r.Field, Kind = r.Kind, Rounds = r.Rounds.Select(x => (IReadOnlyList<int>)x.Order().ToArray()).ToList(),
                 Corrections = corrections, Frames = frames,
                 Statistics = StatisticsOf(r, s.Order, frames, corrections),
-                VanishedEdges = VanishingEdges.In(g, r.Field),
+                VanishedEdges = r.VanishedEdges,
             };
         }
     }
@@ -70,13 +71,10 @@ public static class ScheduleBuilder
             measuredFrames.Select(fr => fr.X.Terms.Count).DefaultIfEmpty(0).Max(),
             measuredFrames.Select(fr => fr.Z.Terms.Count).DefaultIfEmpty(0).Max(),
             outputFrames.Select(Sources).DefaultIfEmpty(0).Max(),
-            corrections.Count(c => !IsZeroText(c.X)),
-            corrections.Count(c => !IsZeroText(c.Z)),
+            corrections.Count(c => !c.X.IsZero),
+            corrections.Count(c => !c.Z.IsZero),
             LongestChain(r.Graph.NodeCount, order, frames));
     }
-
-    // Canonical text of zero is "0" in every field (docs/formats.md).
-    private static bool IsZeroText(string s) => s == "0";
 
     /// <summary>
     /// Longest path in the DAG v -> w ("the outcome of v enters the frame of w"), counted in nodes. Frames

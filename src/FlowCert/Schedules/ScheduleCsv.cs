@@ -29,11 +29,11 @@ public static class ScheduleCsv
         for (int k = 0; k < s.Rounds.Count; k++) foreach (var v in s.Rounds[k]) Row("measure", g.Names[v], roundOf[v], "", "", "");
         foreach (var o in g.SortedOutputs) Row("output", g.Names[o], "output", "", "", "");
         foreach (var e in s.VanishedEdges) Row("vanished", g.Names[e.U], "", g.Names[e.V], e.Weight.ToString(), "");
-        foreach (var c in s.Corrections) Row("correction", g.Names[c.Target], roundOf[c.Target], g.Names[c.Source], c.X, c.Z);
+        foreach (var c in s.Corrections) Row("correction", g.Names[c.Target], roundOf[c.Target], g.Names[c.Source], c.X.ToString(), c.Z.ToString());
         foreach (var fr in s.Frames)
         {
-            var x = fr.X.Terms.ToDictionary(t => t.Node, t => t.Coefficient);
-            var z = fr.Z.Terms.ToDictionary(t => t.Node, t => t.Coefficient);
+            var x = fr.X.Terms.ToDictionary(t => t.Node, t => t.Coefficient.ToString());
+            var z = fr.Z.Terms.ToDictionary(t => t.Node, t => t.Coefficient.ToString());
             var sources = fr.X.Terms.Select(t => t.Node).Union(fr.Z.Terms.Select(t => t.Node)).OrderBy(v => rank[v]);
             foreach (var v in sources)
                 Row("frame", g.Names[fr.Node], roundOf[fr.Node], g.Names[v], x.GetValueOrDefault(v, "0"), z.GetValueOrDefault(v, "0"));

@@ -1,3 +1,4 @@
+using FlowCert.Flows;
 using FlowCert.Certificates;
 using FlowCert.Graphs;
 using Newtonsoft.Json;
@@ -25,12 +26,12 @@ public static class ScheduleJson
         {
             // Name lists, forms and correction entries are written compactly, one to a line.
             void Names(IEnumerable<int> nodes) => w.WriteRawValue(JsonConvert.SerializeObject(nodes.Select(v => g.Names[v]).ToArray()));
-            Dictionary<string, string> Terms(LinearForm f) => f.Terms.ToDictionary(t => g.Names[t.Node], t => t.Coefficient);
+            Dictionary<string, string> Terms(LinearForm f) => f.Terms.ToDictionary(t => g.Names[t.Node], t => t.Coefficient.ToString());
 
             w.WriteStartObject();
             w.WritePropertyName("format"); w.WriteValue(Format);
             w.WritePropertyName("version"); w.WriteValue(Version);
-            w.WritePropertyName("flow"); w.WriteValue(CertificateWriter.KindName(s.Kind));
+            w.WritePropertyName("flow"); w.WriteValue(FlowKinds.Name(s.Kind));
             w.WritePropertyName("field"); w.WriteValue(s.Field.Name);
             w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(g));
             w.WritePropertyName("vanishedEdges");
@@ -41,7 +42,7 @@ public static class ScheduleJson
             w.WritePropertyName("corrections");
             w.WriteStartArray();
             foreach (var c in s.Corrections)
-                w.WriteRawValue(JsonConvert.SerializeObject(new { outcome = g.Names[c.Source], node = g.Names[c.Target], x = c.X, z = c.Z }));
+                w.WriteRawValue(JsonConvert.SerializeObject(new { outcome = g.Names[c.Source], node = g.Names[c.Target], x = c.X.ToString(), z = c.Z.ToString() }));
             w.WriteEndArray();
             w.WritePropertyName("frames");
             w.WriteStartArray();

@@ -1,3 +1,4 @@
+using FlowCert.Flows;
 using System.Text;
 using FlowCert.Certificates;
 using FlowCert.Graphs;
@@ -14,11 +15,11 @@ public static class ScheduleText
         var sb = new StringBuilder();
         foreach (var (v, coefficient) in form.Terms)
         {
-            bool negative = coefficient.StartsWith('-');
-            var magnitude = negative ? coefficient[1..] : coefficient;
+            bool negative = coefficient.IsNegative;
+            var magnitude = negative ? coefficient.Negate() : coefficient;
             if (sb.Length > 0) sb.Append(negative ? " - " : " + ");
             else if (negative) sb.Append('-');
-            if (magnitude != "1") sb.Append(magnitude).Append('*');
+            if (!magnitude.IsOne) sb.Append(magnitude).Append('*');
             sb.Append("m_").Append(names[v]);
         }
         return sb.ToString();
@@ -33,7 +34,7 @@ public static class ScheduleText
         void Line(string text = "") => o.Append(text).Append('\n');
         string When(NodeFrame fr) => fr.IsOutput ? "output" : $"round {fr.Round}";
 
-        Line($"feed-forward schedule: field {s.Field.Name}, {CertificateWriter.KindName(s.Kind)} flow, depth {st.Depth}; " +
+        Line($"feed-forward schedule: field {s.Field.Name}, {FlowKinds.Name(s.Kind)} flow, depth {st.Depth}; " +
              $"{g.NodeCount} nodes: {g.Inputs.Count} input(s), {g.Outputs.Count} output(s), {g.NodeCount - g.Outputs.Count} measured");
         if (s.VanishedEdges.Count > 0) Line("warning: " + VanishingEdges.Warning(g, s.Field, s.VanishedEdges));
         Line($"m_v = outcome of v re-read through its frame (raw outcome - b_v); all arithmetic exact, in {s.Field.Name}");
@@ -42,7 +43,7 @@ public static class ScheduleText
         Table(o, ["round", "nodes"], s.Rounds.Select((r, k) => new[] { (k + 1).ToString(), string.Join(" ", r.Select(v => g.Names[v])) }));
         Line();
         Line("corrections triggered by outcome m_v: X_u^(x*m_v) Z_u^(z*m_v) on node u, or add -x*m_v, -z*m_v to u's frame");
-        Table(o, ["outcome", "node", "x", "z"], s.Corrections.Select(c => new[] { "m_" + g.Names[c.Source], g.Names[c.Target], c.X, c.Z }));
+        Table(o, ["outcome", "node", "x", "z"], s.Corrections.Select(c => new[] { "m_" + g.Names[c.Source], g.Names[c.Target], c.X.ToString(), c.Z.ToString() }));
         Line();
         Line("frames: node w holds X^a Z^b on its ideal state. Measure w with D' = X^a D X^-a (entry j of D' is entry j-a of D)");
         Line("and read m_w = raw - b; after the last round apply (X^a Z^b)^-1 to each output.");

@@ -52,6 +52,9 @@ public class CertificateRoundTripTests
     [InlineData("\"verdict\": \"flow\",", "\"verdict\": \"flow\",\n  \"obstruction\": {},", "unknown key 'obstruction'")]
     [InlineData("[\"b\", \"c\", \"-1/2\"]", "[\"b\", \"c\", \"-1/3\"]", "graphSha256 is not the SHA-256")]
     [InlineData("\"a\": {\"b\": \"1\"}", "\"a\": {\"z\": \"1\"}", "unknown node 'z'")]
+    // Values are read into the field as they are read (docs/formats.md: "for Q a reduced a/b or a").
+    [InlineData("\"a\": {\"b\": \"1\"}", "\"a\": {\"b\": \"2/2\"}", "'2/2' on b is not an element of Q in canonical form")]
+    [InlineData("\"a\": {\"b\": \"1\"}", "\"a\": {\"b\": \"0.5\"}", "'0.5' on b is not an element of Q in canonical form")]
     public void AReaderRejectsWhatTheFormatDoesNotAllowNamingLineAndColumn(string from, string to, string expected)
     {
         var text = Wire();
@@ -59,6 +62,17 @@ public class CertificateRoundTripTests
         var e = Assert.Throws<CertificateFormatException>(() => CertificateReader.Parse(text.Replace(from, to), "wire.json"));
         Assert.Contains(expected, e.Message);
         Assert.True(e.Line > 1 && e.Column > 0, e.Message);
+    }
+
+    [Fact]
+    public void ValuesAreReadTypedInTheCertificatesField()
+    {
+        var r = CertificateReader.Parse(Wire(), "wire.json");
+        var b = r.Corrections[r.Graph.IndexOf("b")];
+        Assert.Equal([r.Graph.IndexOf("c")], b.Nodes);
+        Assert.Equal(FlowCert.Algebra.Rational.Create(-2, 1), b.Values<FlowCert.Algebra.Rational>()[0]);
+        Assert.True(b[0].IsNegative);
+        Assert.Throws<InvalidOperationException>(() => b.Values<ulong>().Length);
     }
 
     [Fact]

@@ -42,7 +42,7 @@ public class PictureTests
 
     private static uint Rgb(string hex) => uint.Parse(hex[1..], NumberStyles.HexNumber) << 8 | 0xff;
 
-    [Fact]
+    [ToolFact("rsvg-convert")]
     public void AFlowPictureRendersWithItsColoursAndTheSizeItDeclares()
     {
         var svg = Draw(Solve("qutrit-patch", FieldSpec.PrimeField(5)).Graph, Solve("qutrit-patch", FieldSpec.PrimeField(5)));
@@ -73,7 +73,7 @@ public class PictureTests
         Assert.DoesNotContain("vanish", DotPicture.Write(f5.Graph, f5, "patch"));
     }
 
-    [Fact]
+    [ToolFact("rsvg-convert")]
     public void AProofOfAbsenceShowsTheBlockedSetAndNoCorrections()
     {
         var r = Solve("merge-attempt", FieldSpec.Rationals);
@@ -145,7 +145,7 @@ public class PictureTests
             Assert.Matches(@"^-?\d+\.\d$", number);
     }
 
-    [Fact]
+    [ToolFact("dot")]
     public void GraphvizAcceptsTheDotPictures()
     {
         foreach (var r in new[] { Solve("qutrit-patch", FieldSpec.PrimeField(5)), Solve("merge-attempt", FieldSpec.Rationals), Solve("splitter-pair", FieldSpec.PrimeField(2), FlowKind.Causal) })

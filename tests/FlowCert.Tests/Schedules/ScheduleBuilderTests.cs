@@ -73,8 +73,8 @@ public class ScheduleBuilderTests
                 .ToDictionary(p => p.Name, p => Fraction.FromString((string)p.Value!, System.Globalization.CultureInfo.InvariantCulture));
             var x = -vector.GetValueOrDefault(n[c.Target], Fraction.Zero);
             var z = -vector.Aggregate(Fraction.Zero, (sum, kv) => sum + weights.GetValueOrDefault((n[c.Target], kv.Key), Fraction.Zero) * kv.Value);
-            Assert.Equal(x, Fraction.FromString(c.X, System.Globalization.CultureInfo.InvariantCulture));
-            Assert.Equal(z, Fraction.FromString(c.Z, System.Globalization.CultureInfo.InvariantCulture));
+            Assert.Equal(x, Fraction.FromString(c.X.ToString(), System.Globalization.CultureInfo.InvariantCulture));
+            Assert.Equal(z, Fraction.FromString(c.Z.ToString(), System.Globalization.CultureInfo.InvariantCulture));
             checkedEntries++;
         }
         Assert.True(checkedEntries > 0);
@@ -92,11 +92,11 @@ public class ScheduleBuilderTests
     {
         var r = Solve(Wire3, FieldSpec.PrimeField(3));
         int a = r.Graph.IndexOf("a");
-        var bad = r with { Corrections = r.Corrections.ToDictionary(kv => kv.Key, kv => kv.Key == a ? new NodeVector([(r.Graph.IndexOf("b"), "2")]) : kv.Value) };
+        var bad = r with { Corrections = r.Corrections.ToDictionary(kv => kv.Key, kv => kv.Key == a ? NodeVector.Create(r.Field, [r.Graph.IndexOf("b")], new ulong[] { 2 }) : kv.Value) };
         var e = Assert.Throws<ScheduleException>(() => ScheduleBuilder.Build(bad));
         Assert.Contains("correction of a", e.Message);
         Assert.Contains("condition 2", e.Message);
-        var backwards = r with { Corrections = r.Corrections.ToDictionary(kv => kv.Key, kv => kv.Key == r.Graph.IndexOf("b") ? new NodeVector([(a, "1")]) : kv.Value) };
+        var backwards = r with { Corrections = r.Corrections.ToDictionary(kv => kv.Key, kv => kv.Key == r.Graph.IndexOf("b") ? NodeVector.Create(r.Field, [a], new ulong[] { 1 }) : kv.Value) };
         Assert.Contains("condition 1", Assert.Throws<ScheduleException>(() => ScheduleBuilder.Build(backwards)).Message);
     }
 }

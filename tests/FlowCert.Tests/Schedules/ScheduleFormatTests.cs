@@ -40,7 +40,7 @@ public class ScheduleFormatTests
         Assert.Equal("flowcert-schedule", (string)root["format"]!);
         Assert.Equal(s.Corrections.Count, ((JArray)root["corrections"]!).Count);
         foreach (var (c, j) in s.Corrections.Zip((JArray)root["corrections"]!))
-            Assert.Equal((s.Graph.Names[c.Source], s.Graph.Names[c.Target], c.X, c.Z), ((string)j["outcome"]!, (string)j["node"]!, (string)j["x"]!, (string)j["z"]!));
+            Assert.Equal((s.Graph.Names[c.Source], s.Graph.Names[c.Target], c.X.ToString(), c.Z.ToString()), ((string)j["outcome"]!, (string)j["node"]!, (string)j["x"]!, (string)j["z"]!));
         var frames = (JArray)root["frames"]!;
         Assert.Equal(s.Frames.Count, frames.Count);
         Assert.All(frames.Where(f => f["round"]!.Type == JTokenType.Null), f => Assert.Contains((string)f["node"]!, new[] { "r0c3", "r1c3" }));

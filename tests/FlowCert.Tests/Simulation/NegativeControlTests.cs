@@ -20,12 +20,14 @@ public class NegativeControlTests
         int p = (int)r.Field.Prime;
         foreach (var v in r.Rounds.SelectMany(x => x))
         {
-            var entries = r.Corrections[v].Entries;
+            var c = r.Corrections[v];
+            var nodes = c.Nodes.ToArray();
+            var values = c.Values<ulong>().ToArray();
             if (p >= 3)
-                yield return Replace(r, v, new NodeVector(entries.Select(e => (e.Node, (ulong.Parse(e.Value) * 2 % (ulong)p).ToString())).ToList()));
+                yield return Replace(r, v, NodeVector.Create(r.Field, nodes, values.Select(x => x * 2 % (ulong)p).ToArray()));
             else
-                for (int k = 0; k < entries.Count; k++)
-                    yield return Replace(r, v, new NodeVector(entries.Where((_, i) => i != k).ToList()));
+                for (int k = 0; k < nodes.Length; k++)
+                    yield return Replace(r, v, NodeVector.Create(r.Field, nodes.Where((_, i) => i != k).ToArray(), values.Where((_, i) => i != k).ToArray()));
         }
     }
 

@@ -48,7 +48,7 @@ public sealed class ExhaustiveSmallGraphTests(ITestOutputHelper output)
         return count;
     }
 
-    [Theory]
+    [ToolTheory("nauty-geng")]
     [InlineData(false)]
     [InlineData(true)]
     public void EveryGraphUpToFiveNodesWithEveryInputOutputChoice(bool randomWeights)
@@ -79,7 +79,7 @@ public sealed class ExhaustiveSmallGraphTests(ITestOutputHelper output)
         Assert.True(failures.IsEmpty, $"{failures.Count} disagreements, first ones:\n{string.Join("\n", failures.Take(3))}");
     }
 
-    [Theory]
+    [ToolTheory("nauty-geng")]
     [InlineData(6, 12)]
     [InlineData(7, 3)]
     public void SeededSampleOnSixAndSevenNodes(int order, int choicesPerGraph)

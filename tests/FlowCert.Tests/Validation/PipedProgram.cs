@@ -24,6 +24,7 @@ public static class PipedProgram
         Process process;
         try
         {
+            if (DebianTools.IsHidden(program)) throw new Win32Exception("hidden by FLOWCERT_TEST_HIDE_PROGRAMS");
             process = Process.Start(info) ?? throw new InvalidOperationException($"could not start {program}");
         }
         catch (Win32Exception e)

@@ -16,6 +16,7 @@ public sealed class SmtComparisonTests(ITestOutputHelper output)
 {
     private static readonly string[] Fields = ["Q", "F2", "F3", "F5", "F7"];
     private const int QuestionsPerProcess = 40;
+    private const int RetrySeconds = 120;
 
     /// <summary>The weights of the task that have a value in the field (fractions and negatives stay in every field).</summary>
     private static string[] WeightsFor(string field)
@@ -24,7 +25,7 @@ public sealed class SmtComparisonTests(ITestOutputHelper output)
 
     private sealed record Question(string Problem, string Expected, string What, int Graph, string Field, ReferenceGraph G);
 
-    [Fact]
+    [ToolFact("z3")]
     public void SolverAgreesWithZ3OnSeededRandomGraphs()
     {
         int graphs = 400 * ValidationScale.Factor;
@@ -59,16 +60,29 @@ public sealed class SmtComparisonTests(ITestOutputHelper output)
         }
         var solverSeconds = clock.Elapsed.TotalSeconds;
         var failures = new ConcurrentBag<string>();
+        var unknown = new ConcurrentBag<Question>();
         var batches = questions.Chunk(QuestionsPerProcess).ToList();
+        void Judge(Question q, string answer)
+        {
+            // "unknown" is z3 giving up (a timeout on a busy machine), not a disagreement: it is retried, then counted
+            if (answer == "unknown") unknown.Add(q);
+            else if (answer != q.Expected)
+                failures.Add($"graph #{q.Graph} over {q.Field}: z3 says {answer} to '{q.What}', expected {q.Expected}\n{q.G.ToOgraph()}");
+        }
         Parallel.ForEach(batches, new ParallelOptions { MaxDegreeOfParallelism = 2 }, batch =>
         {
             var answers = Z3Runner.CheckAll(batch.Select(q => q.Problem).ToList());
-            for (int k = 0; k < batch.Length; k++)
-                if (answers[k] != batch[k].Expected)
-                    failures.Add($"graph #{batch[k].Graph} over {batch[k].Field}: z3 says {answers[k]} to '{batch[k].What}', expected {batch[k].Expected}\n{batch[k].G.ToOgraph()}");
+            for (int k = 0; k < batch.Length; k++) Judge(batch[k], answers[k]);
         });
+        var firstUnknown = unknown.Count;
+        var retry = unknown.ToList();
+        unknown.Clear();
+        Parallel.ForEach(retry, new ParallelOptions { MaxDegreeOfParallelism = 2 }, q => Judge(q, Z3Runner.CheckAll([q.Problem], RetrySeconds)[0]));
         output.WriteLine($"z3 comparison: {graphs} graphs, {questions.Count} z3 questions in {batches.Count} z3 processes; " +
+                         $"{firstUnknown} unknown at first, {unknown.Count} still unknown after a retry with {RetrySeconds} s each; " +
                          $"{string.Join("; ", tally.Select(kv => $"{kv.Key}: {kv.Value}"))}; solver + certificates {solverSeconds:F1} s, total {clock.Elapsed.TotalSeconds:F1} s");
         Assert.True(failures.IsEmpty, $"{failures.Count} disagreements, first ones:\n{string.Join("\n", failures.Take(3))}");
+        // unknowns are not contradictions; but a comparison z3 mostly could not answer would have checked nothing
+        Assert.True(unknown.Count * 2 <= questions.Count, $"z3 answered only {questions.Count - unknown.Count} of {questions.Count} questions (the rest stayed unknown)");
     }
 }

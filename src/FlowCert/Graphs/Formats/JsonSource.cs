@@ -5,8 +5,9 @@ using Newtonsoft.Json.Linq;
 namespace FlowCert.Graphs.Formats;
 
 /// <summary>
-/// A JSON text loaded strictly (no comments, no duplicate keys, nothing after the value) with the line
-/// and column of every token, so readers of graphs and certificates can name where a problem starts.
+/// A JSON text loaded strictly (RFC 8259 only, checked by StrictJsonSyntax: no comments, single quotes,
+/// unquoted keys, trailing commas or NUL; no duplicate keys, nothing after the value) with the line and
+/// column of every token, so readers of graphs and certificates can name where a problem starts.
 /// </summary>
 public sealed class JsonSource
 {
@@ -21,6 +22,7 @@ public sealed class JsonSource
     /// <summary>Parses the text; a syntax error is a <see cref="GraphFormatException"/> with line and column.</summary>
     public static JsonSource Load(string text, string fileName)
     {
+        StrictJsonSyntax.Check(text, fileName);
         try
         {
             using var reader = new JsonTextReader(new StringReader(text)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
@@ -32,30 +34,11 @@ public sealed class JsonSource
             });
             while (reader.Read())
                 throw new GraphFormatException(fileName, reader.LineNumber, Math.Max(reader.LinePosition, 1), "text after the JSON value");
-            var source = new JsonSource(fileName, text.Split('\n'), root);
-            if (text.Contains("/*") || text.Contains("//")) source.RejectComments(text);
-            return source;
+            return new JsonSource(fileName, text.Split('\n'), root);
         }
         catch (JsonReaderException e)
         {
             throw new GraphFormatException(fileName, Math.Max(e.LineNumber, 1), Math.Max(e.LinePosition, 1), e.Message.Split(" Path")[0].TrimEnd('.'));
-        }
-    }
-
-    // Json.NET skips comments silently; JSON has none. Outside strings, "//" or "/*" is a comment.
-    private void RejectComments(string text)
-    {
-        bool inString = false;
-        int line = 1, column = 0;
-        for (int i = 0; i < text.Length; i++)
-        {
-            char c = text[i];
-            column++;
-            if (c == '\n') { line++; column = 0; continue; }
-            if (inString) { if (c == '\\') { i++; column++; } else if (c == '"') inString = false; continue; }
-            if (c == '"') inString = true;
-            else if (c == '/' && i + 1 < text.Length && text[i + 1] is '/' or '*')
-                throw new GraphFormatException(FileName, line, column, "comments are not JSON");
         }
     }
 

@@ -62,7 +62,7 @@ public class Graph6Tests
     /// Every graph on 5 vertices from nauty-geng (34 of them up to isomorphism: OEIS A000088, from
     /// memory) is read with the edges nauty-showg prints for it, and written back to the same line.
     /// </summary>
-    [Fact]
+    [ToolFact("nauty-geng nauty-showg")]
     public void AllGraphsOnFiveVerticesFromGengRoundTrip()
     {
         var lines = NautyTools.Run("nauty-geng", "-q", "5").Split('\n', StringSplitOptions.RemoveEmptyEntries);
@@ -78,7 +78,7 @@ public class Graph6Tests
     }
 
     /// <summary>sparse6 written by nauty-copyg -s for every graph on 6 vertices reads as the same graph as its graph6 line.</summary>
-    [Fact]
+    [ToolFact("nauty-geng nauty-copyg")]
     public void Sparse6WrittenByNautyReadsAsTheSameGraph()
     {
         var g6 = NautyTools.Run("nauty-geng", "-q", "6").Split('\n', StringSplitOptions.RemoveEmptyEntries);
@@ -100,7 +100,7 @@ public class Graph6Tests
     /// the nodes in natural order of their names. "padding" covers the special case of formats.txt
     /// where n = 2^k and vertex n - 2 is the last one with an edge.
     /// </summary>
-    [Theory]
+    [ToolTheory("nauty-showg")]
     [MemberData(nameof(WrittenGraphs))]
     public void NautyReadsWhatWeWrite(string which)
     {

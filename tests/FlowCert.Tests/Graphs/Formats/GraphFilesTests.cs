@@ -70,7 +70,7 @@ public class GraphFilesTests
     }
 
     /// <summary>DOT written for a weighted graph with positions, and for names that need quoting, is accepted by Graphviz's dot.</summary>
-    [Fact]
+    [ToolFact("dot")]
     public void GraphvizAcceptsTheDotWeWrite()
     {
         var lattice = LatticeFamilyTests.Make("hexagonal", "3x4", weights: FlowCert.Graphs.Families.WeightRule.ParseChoice("1,-1/2"), seed: 1);
