@@ -50,9 +50,9 @@ public static class NoiseAnalysis
             {
                 if (!flow.Corrections.TryGetValue(v, out var c)) continue;
                 var z = new SortedDictionary<int, Rational>();
-                foreach (var (u, text) in c.Entries)
+                foreach (var (u, value) in c.Entries)
                 {
-                    var cu = CorrectionValue(text);
+                    var cu = CorrectionValue(value);
                     if (round[u] > k) forms.AddTo(LinearForms.Q(u), -cu, m); // X_u(-m c_v(u)): q_u -> q_u - c_v(u) m
                     foreach (var (w, a) in neighbours[u])
                         z[w] = (z.TryGetValue(w, out var old) ? old : Rational.Zero) + a * cu;
@@ -64,9 +64,8 @@ public static class NoiseAnalysis
         return Read(flow, phases, forms);
     }
 
-    /// <summary>The one place a correction coefficient is read (NodeVector values are text for now).</summary>
-    internal static Rational CorrectionValue(string value)
-        => Rational.TryParse(value, out var r) ? r : throw new NoiseInputException($"'{value}' is not an exact rational");
+    /// <summary>The one place a correction coefficient is read: a typed element of Q.</summary>
+    internal static Rational CorrectionValue(FieldElement value) => value.AsRational;
 
     private static List<(int, Rational)>[] Neighbours(FlowResult flow)
     {

@@ -128,10 +128,10 @@ public sealed class GaussianPatternSimulator
         for (int i = 0; i < size; i++) cov[i, target] += a * cov[i, source];
     }
 
-    // A correction coefficient as the certificate holds it (text today; typed after the NodeVector change).
-    private static double Value(string text)
+    // A correction coefficient as the certificate holds it: a typed element of Q.
+    private static double Value(FlowCert.Algebra.FieldElement value)
     {
-        Assert.True(FlowCert.Algebra.Rational.TryParse(text, out var x), text);
+        var x = value.AsRational;
         return (double)x.Numerator / (double)x.Denominator;
     }
 }

@@ -16,13 +16,11 @@ public class NegativeControlTests
         foreach (var round in flow.Rounds)
             foreach (var v in round)
             {
-                if (!flow.Corrections.TryGetValue(v, out var c) || c.Entries.Count == 0) continue;
-                var (u, value) = c.Entries[0];
-                Assert.True(Rational.TryParse(value, out var x));
-                var entries = c.Entries.ToList();
-                entries[0] = (u, (x * 2).ToString());
+                if (!flow.Corrections.TryGetValue(v, out var c) || c.Count == 0) continue;
+                var values = c.Values<Rational>().ToArray();
+                values[0] *= 2;
                 var corrections = flow.Corrections.ToDictionary(p => p.Key, p => p.Value);
-                corrections[v] = new NodeVector(entries);
+                corrections[v] = NodeVector.Create(flow.Field, c.Nodes, values);
                 return flow with { Corrections = corrections };
             }
         return null;
