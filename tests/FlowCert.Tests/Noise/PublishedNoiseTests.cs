@@ -65,3 +65,36 @@ public class PublishedNoiseTests
         Assert.Equal(3, NoiseFigures.Decibels(NoiseFigures.SqueezingParameter(3)), 12);
     }
 }
+
+public class FidelityFormulaTests
+{
+    // The fidelity of a pure state with a state rho is the overlap Tr(rho_1 rho_2) = 2 pi * integral of
+    // W_1 W_2 over phase space (hbar = 1; common practice). Integrating the two Gaussian Wigner functions
+    // numerically (MathNet.Numerics Gauss-Legendre) checks the closed form 1/sqrt(det(S S^T + N)) on the
+    // loop wire, whose S = diag(-3/4, -4/3) is not orthogonal.
+    [Theory]
+    [InlineData(0.0)]
+    [InlineData(6.0)]
+    public void TheClosedFormMatchesTheWignerOverlap(double decibels)
+    {
+        var report = NoiseAnalysis.Analyze(PublishedNoiseTests.Certify(
+            "input t0\noutput t4\nedge t0 t1 1\nedge t1 t2 -1/2\nedge t2 t3 0.75\nedge t3 t4 2\n"));
+        double r = NoiseFigures.SqueezingParameter(decibels);
+        var n = NoiseFigures.AddedCovariance(report, r);
+        double s00 = NoiseFigures.ToDouble(report.S[0, 0]), s01 = NoiseFigures.ToDouble(report.S[0, 1]);
+        double s10 = NoiseFigures.ToDouble(report.S[1, 0]), s11 = NoiseFigures.ToDouble(report.S[1, 1]);
+        // Ideal output S|alpha> (alpha = 0 suffices: both states have the same mean) and the noisy one.
+        double[,] ideal = { { (s00 * s00 + s01 * s01) / 2, (s00 * s10 + s01 * s11) / 2 }, { (s00 * s10 + s01 * s11) / 2, (s10 * s10 + s11 * s11) / 2 } };
+        double[,] noisy = { { ideal[0, 0] + n[0, 0], ideal[0, 1] + n[0, 1] }, { ideal[1, 0] + n[1, 0], ideal[1, 1] + n[1, 1] } };
+        double overlap = 2 * Math.PI * MathNet.Numerics.Integration.GaussLegendreRule.Integrate(
+            (q, p) => Wigner(ideal, q, p) * Wigner(noisy, q, p), -12, 12, -12, 12, 128);
+        Assert.Equal(overlap, NoiseFigures.CoherentStateFidelity(report, r), 8);
+    }
+
+    private static double Wigner(double[,] c, double q, double p)
+    {
+        double det = c[0, 0] * c[1, 1] - c[0, 1] * c[1, 0];
+        double quadratic = (c[1, 1] * q * q - 2 * c[0, 1] * q * p + c[0, 0] * p * p) / det;
+        return Math.Exp(-quadratic / 2) / (2 * Math.PI * Math.Sqrt(det));
+    }
+}
