@@ -70,7 +70,7 @@ public class FidelityFormulaTests
 {
     // The fidelity of a pure state with a state rho is the overlap Tr(rho_1 rho_2) = 2 pi * integral of
     // W_1 W_2 over phase space (hbar = 1; common practice). Integrating the two Gaussian Wigner functions
-    // numerically (MathNet.Numerics Gauss-Legendre) checks the closed form 1/sqrt(det(S S^T + N)) on the
+    // numerically (MathNet.Numerics quadrature rule) checks the closed form 1/sqrt(det(S S^T + N)) on the
     // loop wire, whose S = diag(-3/4, -4/3) is not orthogonal.
     [Theory]
     [InlineData(0.0)]
