@@ -49,7 +49,7 @@ public static class DemoCommand
         }
         o.Write(NoiseScene.Text());
         o.WriteLine();
-        o.WriteLine($"{written} certificates written to {outDir}/ ; check one with: dotnet run --project checker/FlowCheck -- {outDir}/splitter-pair.Q.general.json");
+        o.WriteLine($"{written} certificates written to {Escaped.Of(outDir)}/ ; check one with: dotnet run --project checker/FlowCheck -- {Escaped.Of(outDir)}/splitter-pair.Q.general.json");
         return ExitCode.Flow;
     }
 }
