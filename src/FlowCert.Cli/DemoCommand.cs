@@ -37,7 +37,7 @@ public static class DemoCommand
                 var cells = new List<string>();
                 foreach (var r in results)
                 {
-                    var kind = CertificateWriter.KindName(r.Kind);
+                    var kind = FlowKinds.Name(r.Kind);
                     SafeFile.WriteAllText(Path.Combine(outDir, $"{design.Name}.{field.Name}.{kind}.json"), CertificateWriter.Write(r));
                     written++;
                     cells.Add(r.Obstruction is { } b

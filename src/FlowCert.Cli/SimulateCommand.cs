@@ -42,7 +42,7 @@ public static class SimulateCommand
         var result = ScheduleCommand.Read(certPath);
         if (CanonicalForm.Sha256(graph) != CanonicalForm.Sha256(result.Graph))
             throw new UserInputException($"{graphPath} and {certPath} describe different graphs (canonical SHA-256 {CanonicalForm.Sha256(graph)[..12]}... and {CanonicalForm.Sha256(result.Graph)[..12]}...)");
-        var vanished = VanishingEdges.In(result.Graph, result.Field);
+        var vanished = result.VanishedEdges;
         if (vanished.Count > 0) Terminal.Warn($"{certPath}: {VanishingEdges.Warning(result.Graph, result.Field, vanished)}", stderr);
         QuditPattern pattern;
         DeterminismReport report;

@@ -57,7 +57,7 @@ public static class SolveCommand
         w.WriteStartObject();
         w.WritePropertyName("verdict"); w.WriteValue(r.HasFlow ? "flow" : "noflow");
         w.WritePropertyName("depth"); if (r.HasFlow) w.WriteValue(r.Depth); else w.WriteNull();
-        w.WritePropertyName("flow"); w.WriteValue(CertificateWriter.KindName(r.Kind));
+        w.WritePropertyName("flow"); w.WriteValue(FlowKinds.Name(r.Kind));
         w.WritePropertyName("field"); w.WriteValue(r.Field.Name);
         w.WritePropertyName("nodes"); w.WriteValue(r.Graph.NodeCount);
         w.WritePropertyName("edges"); w.WriteValue(r.Graph.Edges.Count);

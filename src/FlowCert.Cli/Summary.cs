@@ -20,7 +20,7 @@ public static class Summary
             return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
         }
         o.WriteLine($"graph     {Escaped.Of(source)}: {Counted.Of(g.NodeCount, "node")}, {Counted.Of(g.Edges.Count, "edge")}, {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}, {g.NodeCount - g.Outputs.Count} measured");
-        o.WriteLine($"field     {r.Field.Name}    flow: {CertificateWriter.KindName(r.Kind)}");
+        o.WriteLine($"field     {r.Field.Name}    flow: {FlowKinds.Name(r.Kind)}");
         if (r.VanishedEdges.Count > 0)
             Terminal.Warn($"{source}: {VanishingEdges.Warning(g, r.Field, r.VanishedEdges)}");
         if (r.Obstruction is { } blocked)

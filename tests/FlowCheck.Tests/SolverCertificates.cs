@@ -59,7 +59,7 @@ public static class SolverCertificates
                 FlowResult result;
                 try { result = FlowSolver.Solve(graph, field, kind); }
                 catch (WeightNotInFieldException) { continue; }
-                yield return new Produced($"{name}.{field.Name}.{CertificateWriter.KindName(kind)}", text, CertificateWriter.Write(result));
+                yield return new Produced($"{name}.{field.Name}.{FlowKinds.Name(kind)}", text, CertificateWriter.Write(result));
             }
     }
 }

@@ -7,7 +7,7 @@ namespace FlowCert.Algebra;
 /// specialisation of <see cref="SparseElimination{T, TField}"/> with the same results (columns taken in
 /// increasing id, so the canonical solutions agree). Pays off when the block is dense.
 /// </summary>
-public sealed class BitElimination : IEliminationResult<ulong>
+internal sealed class BitElimination : IEliminationResult<ulong>
 {
     private readonly int[] columnIds;
     private readonly int m, words, transformOffset;

@@ -37,7 +37,7 @@ public sealed record FieldSpec
         if (digits.Length == 0 || !digits.All(char.IsAsciiDigit))
             throw new FieldSpecException($"'{text}' is not a field: write Q or a prime such as 2, 3 or 7.");
         // A decimal number too long for 64 bits is still a number: say it is too large, not "not a field".
-        if (!ulong.TryParse(digits, NumberStyles.None, CultureInfo.InvariantCulture, out var p) || p >= 1UL << 62)
+        if (!ulong.TryParse(digits, NumberStyles.None, CultureInfo.InvariantCulture, out var p) || p >= Algebra.PrimeField.Bound)
             throw new FieldSpecException($"{digits.TrimStart('0')} is too large: primes below 2^62 are supported.");
         if (p < 2) throw new FieldSpecException($"{p} is not a prime: write Q or a prime such as 2, 3 or 7.");
         if (!Primality.IsPrime(p))

@@ -7,7 +7,7 @@ namespace FlowCert.Algebra;
 /// solution is unique, so every implementation returns the same solutions; the left-kernel basis may
 /// differ between implementations (callers that publish it reduce it to echelon form first).
 /// </summary>
-public interface IEliminationResult<T> where T : struct
+internal interface IEliminationResult<T> where T : struct
 {
     /// <summary>The rank of B.</summary>
     int Rank { get; }
@@ -18,7 +18,7 @@ public interface IEliminationResult<T> where T : struct
 }
 
 /// <summary>Chooses how to eliminate a block: sparse rows in general, packed bits for dense blocks over F_2.</summary>
-public static class Elimination
+internal static class Elimination
 {
     /// <summary>Eliminates the matrix whose rows are <paramref name="rows"/> over <paramref name="field"/>.</summary>
     public static IEliminationResult<T> Run<T, TField>(TField field, IReadOnlyList<SparseVector<T>> rows)

@@ -1,7 +1,7 @@
 namespace FlowCert.Algebra;
 
 /// <summary>Deterministic primality for 64-bit integers and word-sized modular arithmetic.</summary>
-public static class Primality
+internal static class Primality
 {
     // Miller-Rabin with these seven bases is exact for every n < 2^64 (common practice; the base set
     // is the one published on the "Deterministic variants" of Miller-Rabin testing, from memory).

@@ -5,13 +5,16 @@ namespace FlowCert.Algebra;
 /// <summary>The prime field F_p = Z/pZ for a prime p below 2^62, elements as residues 0..p-1.</summary>
 public readonly struct PrimeField : IField<ulong>
 {
+    /// <summary>Every supported prime is below this bound, 2^62 (products of two residues fit in 128 bits with room for sums).</summary>
+    public const ulong Bound = 1UL << 62;
+
     /// <summary>The characteristic.</summary>
     public ulong P { get; }
 
     /// <summary>Creates F_p; throws when p is not a prime below 2^62.</summary>
     public PrimeField(ulong p)
     {
-        if (p >= 1UL << 62 || !Primality.IsPrime(p)) throw new ArgumentException($"{p} is not a prime below 2^62");
+        if (p >= Bound || !Primality.IsPrime(p)) throw new ArgumentException($"{p} is not a prime below 2^62");
         P = p;
     }
 

@@ -8,7 +8,7 @@ namespace FlowCert.Algebra;
 /// solution that is zero off the pivot columns does not depend on which row is chosen as a pivot
 /// (rows are chosen shortest first only to limit fill-in).
 /// </summary>
-public sealed class SparseElimination<T, TField> : IEliminationResult<T> where T : struct where TField : struct, IField<T>
+internal sealed class SparseElimination<T, TField> : IEliminationResult<T> where T : struct where TField : struct, IField<T>
 {
     private readonly TField f;
     private readonly SparseVector<T>[] reduced;   // R = T B, row by row

@@ -1,7 +1,7 @@
 namespace FlowCert.Algebra;
 
 /// <summary>An immutable sparse vector: strictly increasing indices and their non-zero values.</summary>
-public readonly struct SparseVector<T> where T : struct
+internal readonly struct SparseVector<T> where T : struct
 {
     /// <summary>The positions of the non-zero entries, strictly increasing.</summary>
     public readonly int[] Indices;
@@ -10,8 +10,6 @@ public readonly struct SparseVector<T> where T : struct
 
     /// <summary>Wraps the arrays as given (no copy, no check); indices must be strictly increasing and values non-zero.</summary>
     public SparseVector(int[] indices, T[] values) { Indices = indices; Values = values; }
-    /// <summary>The zero vector.</summary>
-    public static SparseVector<T> Empty => new([], []);
     /// <summary>The vector with <paramref name="one"/> at <paramref name="index"/> and zero elsewhere.</summary>
     public static SparseVector<T> Unit(int index, T one) => new([index], [one]);
     /// <summary>Number of non-zero entries.</summary>

@@ -17,11 +17,8 @@ public static class CertificateWriter
     public const int Version = 1;
     /// <summary>The producer name written into every certificate.</summary>
     public const string ProducerName = "flowcert";
-    /// <summary>Written into every certificate; kept in step with the Version in Directory.Build.props.</summary>
-    public const string ProducerVersion = "0.1.0";
-
-    /// <summary>The name of a flow kind in certificates and on the command line.</summary>
-    public static string KindName(FlowKind kind) => FlowKinds.Name(kind);
+    /// <summary>Written into every certificate: the library's version (Version in Directory.Build.props), as major.minor.patch.</summary>
+    public static readonly string ProducerVersion = typeof(CertificateWriter).Assembly.GetName().Version!.ToString(3);
 
     /// <summary>The certificate text.</summary>
     public static string Write(FlowResult r)
@@ -40,7 +37,7 @@ public static class CertificateWriter
         sb.Append("{\n");
         sb.Append($"  \"format\": {Quote(Format)},\n");
         sb.Append($"  \"version\": {Version},\n");
-        sb.Append($"  \"flow\": {Quote(KindName(r.Kind))},\n");
+        sb.Append($"  \"flow\": {Quote(FlowKinds.Name(r.Kind))},\n");
         sb.Append($"  \"field\": {Quote(r.Field.Name)},\n");
         sb.Append($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
         sb.Append("  \"graph\": ").Append(GraphJson.WriteObject(g, "  ")).Append(",\n");

@@ -68,7 +68,7 @@ public static class DotPicture
     private static string Legend(OpenGraph g, FlowResult? r)
     {
         var parts = new List<string> { "boxes: inputs", "green double circles: outputs", "grey lines: edges (label: weight unless 1)" };
-        if (r is not null && VanishingEdges.In(g, r.Field) is { Count: > 0 } vanished)
+        if (r is not null && r.VanishedEdges is { Count: > 0 } vanished)
             parts.Add(VanishingEdges.Warning(g, r.Field, vanished));
         if (r is { HasFlow: true })
             parts.Add($"orange arrows: corrections over {r.Field.Name} (label: coefficient unless 1); ranks left to right: rounds 1 to {r.Depth}, then outputs");

@@ -28,7 +28,7 @@ internal static class SvgLegend
         if (g.Outputs.Count > 0) lines.Add(new(Glyph.Output, "output: never measured"));
         if (g.NodeCount > g.Outputs.Count) lines.Add(new(Glyph.Measured, r is { HasFlow: false } ? "measured node outside the blocked set" : "measured node"));
         if (g.Edges.Count > 0) lines.Add(new(Glyph.Edge, "edge, labelled with its weight (no label: weight 1)"));
-        if (r is not null && VanishingEdges.In(g, r.Field) is { Count: > 0 } vanished)
+        if (r is not null && r.VanishedEdges is { Count: > 0 } vanished)
             lines.Add(new(Glyph.None, VanishingEdges.Warning(g, r.Field, vanished)));
         if (r is { HasFlow: true })
         {

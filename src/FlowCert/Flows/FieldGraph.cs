@@ -10,7 +10,7 @@ public sealed class WeightNotInFieldException(string message) : Exception(messag
 /// The adjacency of an open graph with its weights mapped into a field: sorted neighbour lists and
 /// their non-zero weights. Edges whose weight is zero in the field are left out and listed.
 /// </summary>
-public sealed class FieldGraph<T, TField> where T : struct where TField : struct, IField<T>
+internal sealed class FieldGraph<T, TField> where T : struct where TField : struct, IField<T>
 {
     /// <summary>The field the weights were mapped into.</summary>
     public TField Field { get; }

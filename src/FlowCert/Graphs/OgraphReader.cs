@@ -12,13 +12,11 @@ namespace FlowCert.Graphs;
 /// </remarks>
 public static partial class OgraphReader
 {
-    [GeneratedRegex(@"^[A-Za-z_][A-Za-z0-9_.:\-]*\z")]
-    private static partial Regex NamePattern();
     [GeneratedRegex(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?\z")]
     private static partial Regex CoordinatePattern();
 
-    /// <summary>True when the text is a valid node name.</summary>
-    public static bool IsValidName(string name) => NamePattern().IsMatch(name);
+    /// <summary>True when the text is a valid node name (<see cref="NodeNameRule"/>).</summary>
+    public static bool IsValidName(string name) => NodeNameRule.IsValid(name);
 
     /// <summary>Reads a file as a stream (the whole text is never held at once); errors name the file as given.</summary>
     public static OpenGraph ReadFile(string path)
@@ -150,27 +148,12 @@ public static partial class OgraphReader
             }
         }
 
-        private static bool IsNameSpan(ReadOnlySpan<char> s)
-        {
-            // Same language as NamePattern: [A-Za-z_][A-Za-z0-9_.:\-]*
-            if (s.Length == 0) return false;
-            char c0 = s[0];
-            if (!(char.IsAsciiLetter(c0) || c0 == '_')) return false;
-            for (int i = 1; i < s.Length; i++)
-            {
-                char c = s[i];
-                if (!(char.IsAsciiLetterOrDigit(c) || c is '_' or '.' or ':' or '-')) return false;
-            }
-            return true;
-        }
-
         /// <summary>The id of token k as a node name; checks the name the first time it is seen.</summary>
         private int Name(int k)
         {
             var span = Tok(k);
             if (idLookup.TryGetValue(span, out var id)) return id;
-            if (!IsNameSpan(span))
-                throw Error(k, $"bad node name '{Formats.Excerpt.Of(span.ToString())}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
+            if (!NodeNameRule.IsValid(span)) throw Error(k, NodeNameRule.Problem(span.ToString()));
             var name = span.ToString();
             id = names.Count;
             ids.Add(name, id);

@@ -11,7 +11,7 @@ public sealed class ScheduleException(string message) : Exception(message);
 /// of every node. Checks the shape (rounds partition the measured nodes, one parsable correction vector
 /// per measured node), not the flow conditions (the certificate reader has already checked that every value is a canonical element of the field): see <see cref="FlowConditionCheck"/>.
 /// </summary>
-public sealed class CorrectionSystem<T, TField> where T : struct where TField : struct, IField<T>
+internal sealed class CorrectionSystem<T, TField> where T : struct where TField : struct, IField<T>
 {
     /// <summary>The graph with its weights in the field.</summary>
     public FieldGraph<T, TField> Graph { get; }

@@ -6,7 +6,7 @@ namespace FlowCert.Schedules;
 /// Re-tests the three conditions of a generalized flow (flows.md section 3) on parsed correction vectors.
 /// A schedule is refused when any fails; the simulator runs anyway, to show what goes wrong.
 /// </summary>
-public static class FlowConditionCheck
+internal static class FlowConditionCheck
 {
     /// <summary>One sentence per violated condition, in measurement order; empty for a valid flow.</summary>
     public static IReadOnlyList<string> Violations<T, TField>(CorrectionSystem<T, TField> s)

@@ -55,7 +55,7 @@ public static class ScheduleBuilder
                 Graph = g, Field = r.Field, Kind = r.Kind, Rounds = r.Rounds.Select(x => (IReadOnlyList<int>)x.Order().ToArray()).ToList(),
                 Corrections = corrections, Frames = frames,
                 Statistics = StatisticsOf(r, s.Order, frames, corrections),
-                VanishedEdges = VanishingEdges.In(g, r.Field),
+                VanishedEdges = r.VanishedEdges,
             };
         }
     }

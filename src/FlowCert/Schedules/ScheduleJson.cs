@@ -1,3 +1,4 @@
+using FlowCert.Flows;
 using FlowCert.Certificates;
 using FlowCert.Graphs;
 using Newtonsoft.Json;
@@ -30,7 +31,7 @@ public static class ScheduleJson
             w.WriteStartObject();
             w.WritePropertyName("format"); w.WriteValue(Format);
             w.WritePropertyName("version"); w.WriteValue(Version);
-            w.WritePropertyName("flow"); w.WriteValue(CertificateWriter.KindName(s.Kind));
+            w.WritePropertyName("flow"); w.WriteValue(FlowKinds.Name(s.Kind));
             w.WritePropertyName("field"); w.WriteValue(s.Field.Name);
             w.WritePropertyName("graphSha256"); w.WriteValue(CanonicalForm.Sha256(g));
             w.WritePropertyName("vanishedEdges");

@@ -27,7 +27,7 @@ public static class RandomFlowCorpus
             {
                 var solved = FlowSolver.Solve(g, field, kind);
                 if (!solved.HasFlow || solved.Depth == 0 || found.Count >= count) continue;
-                var name = $"F{p} seed {seed} graph {attempt} {CertificateWriter.KindName(kind)}";
+                var name = $"F{p} seed {seed} graph {attempt} {FlowKinds.Name(kind)}";
                 found.Add((name, CertificateReader.Parse(CertificateWriter.Write(solved), name)));
             }
         }

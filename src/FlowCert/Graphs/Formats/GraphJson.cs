@@ -62,8 +62,7 @@ public static class GraphJson
         {
             if (t.Type != JTokenType.String) throw At(t, $"{what} must be a string");
             var s = (string)t!;
-            if (!OgraphReader.IsValidName(s))
-                throw At(t, $"bad node name '{s}': a name starts with a letter or '_' and continues with letters, digits, '_', '.', ':' or '-'");
+            if (!NodeNameRule.IsValid(s)) throw At(t, NodeNameRule.Problem(s));
             return s;
         }
         var nodes = new List<string>();
