@@ -46,6 +46,7 @@ public class ConventionTests
         Assert.StartsWith("{\"verdict\":\"flow\"", json);
         Assert.StartsWith("{\"verdict\":\"flow\"", Flowcert.InProcess("solve", g, "--json").Stdout);
         Assert.Equal(Flowcert.InProcess("schedule", c, "--format", "json").Stdout, Flowcert.InProcess("schedule", c, "--json").Stdout);
+        Assert.Contains("field F3, generalized flow, depth 2", Flowcert.InProcess("schedule", c).Stdout);   // one name per flow kind in prose
         Assert.Contains("disagree", Flowcert.InProcess("schedule", c, "--json", "--format", "csv").Stderr);
         Assert.Equal(2, Flowcert.InProcess("solve", g, "--format", "csv").ExitCode);
         // --out for convert (OUT kept)
