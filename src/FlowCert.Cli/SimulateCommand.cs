@@ -153,16 +153,11 @@ public static class SimulateCommand
     {
         static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;
-        var angles = new PathOption("--angles") { Description = "measurement parameters, NODE VALUE lines (docs/circuits.md); unlisted nodes 0. Without it, random angles unless --map or --expect" };
-        var map = new Option<bool>("--map") { Description = "print the implemented map (p^|O| x p^|I| matrix, normalised, global phase fixed), or write it as JSON with --out" };
-        var expect = new PathOption("--expect") { Description = "a claimed matrix (JSON); exit 0 when every branch implements it up to a global phase, 1 otherwise" };
-        var output = new PathOption("--out") { Description = "with --map: write the map as JSON to this file" };
-        var cmd = new Command("simulate", "Simulate the pattern of a flow certificate over qudits; exit 0 deterministic (and as claimed), 1 outcome-dependent (or not as claimed), 2 bad input")
-            { graph, certArgument, cert, inputs, outputs, dim, seed, branches, angles, map, expect, output };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!,
-            CertificateArgument.Resolve(p.GetValue(certArgument), p.GetValue(cert)) ?? throw new UserInputException("simulate needs a certificate: flowcert simulate GRAPH CERT"),
-            p.GetResult(dim) is { } given ? $"{given.IdentifierToken?.Value ?? "--field"} {p.GetValue(dim)}" : null, p.GetValue(seed), p.GetValue(branches)!, stdout, stderr,
-            p.GetValue(inputs), p.GetValue(outputs), new MapRequest(p.GetValue(angles), p.GetValue(map), p.GetValue(expect), p.GetValue(output))));
+        o.WriteLine($"pattern      {Escaped.Of(graphPath)} with {Escaped.Of(certPath)}: {field}, {Counted.Of(r.MeasuredNodes, "measured node")}, {Counted.Of(g.Outputs.Count, "output")}");
+        o.WriteLine($"state        dimension {r.Dimension}: {r.Qudits} qudits, at most {r.PeakLive} live at once + {r.ReferenceQudits} reference = {r.Amplitudes} amplitudes at the peak");
+        o.WriteLine(given is null ? $"randomness   seed {seed}: a random diagonal unitary D per measured node, one random input state"
+            : request.Angles is null ? $"angles       0 on every measured node (D = 1, the default of --map and --expect); seed {seed}: one random input state"
+            : $"angles       {Escaped.Of(request.Angles)}: {Counted.Of(given.Phases.Count, "node")}, the others 0; seed {seed}: one random input state");
         o.WriteLine(r.Exhaustive
             ? $"branches     {r.BranchesCompared} of {r.TotalBranches:0} (every outcome string)"
             : $"branches     {r.BranchesCompared} of {r.TotalBranches:0} ({selection.SampleSize} sampled, duplicates merged, plus the all-zero one)");
