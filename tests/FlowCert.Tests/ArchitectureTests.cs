@@ -20,7 +20,8 @@ public partial class ArchitectureTests
         ["Flows"],
         ["Certificates"],
         ["Schedules"],
-        ["Simulation", "Drawing", "Noise", "Circuits"],
+        ["Simulation", "Drawing", "Noise"],
+        ["Circuits"], // takes measurement angles from Simulation
         ["Demo"],
     ];
 

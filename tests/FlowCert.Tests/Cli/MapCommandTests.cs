@@ -143,7 +143,7 @@ public sealed class MapCommandTests : IDisposable
 
         // A generalized flow with a correction of two entries (a random certified graph) is refused in one sentence.
         var general = FlowCert.Tests.Simulation.RandomFlowCorpus.Certificates(2, 60, 4242)
-            .First(x => x.Result.Kind == FlowCert.Flows.FlowKind.General && x.Result.Corrections.Values.Any(c => c.Entries.Count > 1)).Result;
+            .First(x => x.Result.Kind == FlowCert.Flows.FlowKind.General && x.Result.Corrections.Values.Any(c => c.Count > 1)).Result;
         var generalCert = Write("general.json", FlowCert.Certificates.CertificateWriter.Write(general));
         var (gcode, gout, gerr) = Run("circuit", generalCert);
         Assert.Equal(2, gcode);
