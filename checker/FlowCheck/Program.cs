@@ -3,12 +3,24 @@ namespace FlowCheck;
 /// <summary>The command line: flowcheck CERT [--graph GRAPH]. Exit 0 valid, 1 invalid, 2 unreadable input.</summary>
 public static class Program
 {
-    public const string Usage = "usage: flowcheck CERT [--graph GRAPH]";
+    public const string Usage = "usage: flowcheck CERT [--graph GRAPH] | --help | --version";
 
     public static int Main(string[] args) => Run(args, Console.Out, Console.Error);
 
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        if (args is ["--help" or "-h"])
+        {
+            stdout.WriteLine(Usage);
+            stdout.WriteLine("Checks a flowcert certificate: exit 0 valid, 1 invalid, 2 unreadable input.");
+            stdout.WriteLine("--graph GRAPH: the certificate must be about exactly this .ograph file.");
+            return 0;
+        }
+        if (args is ["--version"])
+        {
+            stdout.WriteLine($"flowcheck {typeof(Program).Assembly.GetName().Version?.ToString(3)}");
+            return 0;
+        }
         if (Arguments(args) is not var (certPath, graphPath))
         {
             stderr.WriteLine(Usage);

@@ -24,7 +24,7 @@ public static class SimulateCommand
         var outputs = ConvertCommand.OutputsOption();
         var cert = new PathOption("--cert") { Description = "a flow certificate over F_p (JSON)", Required = true };
         var dim = new Option<string?>("--dim") { Description = "qudit dimension, a prime; must equal the certificate's prime (the default)" };
-        var seed = new Option<ulong>("--seed") { Description = "seed of the random angles, input state and sampled branches", DefaultValueFactory = _ => 1 };
+        var seed = new SeedOption("seed of the random angles, input state and sampled branches", 1);
         var branches = new Option<string>("--branches") { Description = "all (every outcome string) or K (K random ones plus the all-zero one)", DefaultValueFactory = _ => "all" };
         var angles = new PathOption("--angles") { Description = "measurement parameters, NODE VALUE lines (docs/circuits.md); unlisted nodes 0. Without it, random angles unless --map or --expect" };
         var map = new Option<bool>("--map") { Description = "print the implemented map (p^|O| x p^|I| matrix, normalised, global phase fixed), or write it as JSON with --out" };
@@ -54,12 +54,12 @@ public static class SimulateCommand
         if (request.Out is not null && !request.Map) throw new UserInputException("--out writes the map: give --map with it");
         var selection = ParseBranches(branchText, seed);
         ulong? dim = dimText is null ? null : ParseDimension(dimText);
-        var graph = GraphFiles.Read(graphPath, inputs, outputs);
+        var graph = GraphInput.Read(graphPath, inputs, outputs);
         var result = ScheduleCommand.Read(certPath);
         if (CanonicalForm.Sha256(graph) != CanonicalForm.Sha256(result.Graph))
             throw new UserInputException($"{graphPath} and {certPath} describe different graphs (canonical SHA-256 {CanonicalForm.Sha256(graph)[..12]}... and {CanonicalForm.Sha256(result.Graph)[..12]}...)");
         var vanished = result.VanishedEdges;
-        if (vanished.Count > 0) stderr.WriteLine($"flowcert: warning: {certPath}: {VanishingEdges.Warning(result.Graph, result.Field, vanished)}");
+        if (vanished.Count > 0) Terminal.Warn($"{certPath}: {VanishingEdges.Warning(result.Graph, result.Field, vanished)}", stderr);
         QuditPattern pattern;
         DeterminismReport report;
         MeasurementAngles? given = null;
@@ -81,7 +81,7 @@ public static class SimulateCommand
                     claim = MapFiles.ReadClaim(File.ReadAllText(request.Expect), request.Expect, p, (int)rows, (int)columns);
             }
             pattern = QuditPattern.FromFlow(result, dim, seed, given?.Diagonals());
-            foreach (var problem in pattern.Violations) stderr.WriteLine($"flowcert: warning: {certPath}: {problem}");
+            foreach (var problem in pattern.Violations) Terminal.Warn($"{certPath}: {problem}", stderr);
             report = OutcomeTreeSimulator.Run(pattern, selection);
             if (claim is not null) comparison = MapComparison.Run(pattern, claim, selection);
         }
@@ -137,6 +137,8 @@ public static class SimulateCommand
         if (text == "all") return OutcomeBranches.All;
         if (text.Length == 0 || !text.All(char.IsAsciiDigit))
             throw new UserInputException($"'{text}' is not a branch selection: write all, or a number K of random branches.");
+        if (text.All(c => c == '0'))
+            throw new UserInputException("--branches 0 would look at no outcome and prove nothing: write all, or a number K of at least 1.");
         if (!int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var k) || k > OutcomeBranches.MaxExhaustive)
             throw new UserInputException($"--branches {text} is too many: sample at most {OutcomeBranches.MaxExhaustive} branches (2^20, the most 'all' enumerates).");
         return OutcomeBranches.Sample(k, seed);
@@ -147,11 +149,11 @@ public static class SimulateCommand
     {
         static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;
-        o.WriteLine($"pattern      {graphPath} with {certPath}: {field}, {r.MeasuredNodes} measured node(s), {g.Outputs.Count} output(s)");
+        o.WriteLine($"pattern      {Escaped.Of(graphPath)} with {Escaped.Of(certPath)}: {field}, {r.MeasuredNodes} measured node(s), {g.Outputs.Count} output(s)");
         o.WriteLine($"state        dimension {r.Dimension}: {r.Qudits} qudits, at most {r.PeakLive} live at once + {r.ReferenceQudits} reference = {r.Amplitudes} amplitudes at the peak");
         o.WriteLine(given is null ? $"randomness   seed {seed}: a random diagonal unitary D per measured node, one random input state"
             : request.Angles is null ? $"angles       0 on every measured node (D = 1, the default of --map and --expect); seed {seed}: one random input state"
-            : $"angles       {request.Angles}: {given.Phases.Count} node(s), the others 0; seed {seed}: one random input state");
+            : $"angles       {Escaped.Of(request.Angles)}: {given.Phases.Count} node(s), the others 0; seed {seed}: one random input state");
         o.WriteLine(r.Exhaustive
             ? $"branches     {r.BranchesCompared} of {r.TotalBranches:0} (every outcome string)"
             : $"branches     {r.BranchesCompared} of {r.TotalBranches:0} ({selection.SampleSize} sampled, duplicates merged, plus the all-zero one)");

@@ -32,18 +32,21 @@ public static class SolveCommand
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
-        var g = GraphFiles.Read(graphPath, inputs, outputs);
+        var g = GraphInput.Read(graphPath, inputs, outputs);
         var parseSeconds = clock.Elapsed.TotalSeconds;
+        if (g.Inputs.Count == 0 && g.Outputs.Count == 0 && g.NodeCount > 0)
+            Terminal.Warn($"{GraphInput.NameOf(graphPath)}: no terminals were given (no inputs and no outputs), so every node is measured; " +
+                          "graph6, sparse6 and Matrix Market files carry none: name them with --inputs and --outputs");
         clock.Restart();
         FlowResult result;
         try { result = FlowSolver.Solve(g, spec, kind); }
-        catch (WeightNotInFieldException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
+        catch (WeightNotInFieldException e) { throw new UserInputException($"{GraphInput.NameOf(graphPath)}: {e.Message}"); }
         var solveSeconds = clock.Elapsed.TotalSeconds;
         clock.Restart();
         if (outPath is not null) SafeFile.WriteAllText(outPath, CertificateWriter.Write(result), graphPath);
         var writeSeconds = clock.Elapsed.TotalSeconds;
         if (json) WriteJson(stdout, result, parseSeconds, solveSeconds, writeSeconds);
-        else Summary.Write(stdout, graphPath, result, outPath);
+        else Summary.Write(stdout, GraphInput.NameOf(graphPath), result, outPath);
         return result.HasFlow ? ExitCode.Flow : ExitCode.NoFlow;
     }
 
