@@ -1,3 +1,4 @@
+using FlowCert.Graphs.Formats;
 using FlowCert.Certificates;
 using FlowCert.Flows;
 using FlowCert.Graphs;
@@ -14,22 +15,22 @@ public static class Summary
         var g = r.Graph;
         string Names(IEnumerable<int> nodes)
         {
-            var list = nodes.ToList();
+            var list = nodes.OrderBy(v => g.Names[v], NaturalNameOrder.Instance).ToList();
             var shown = string.Join(" ", list.Take(MaxNodesShown).Select(v => g.Names[v]));
             return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
         }
-        o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
+        o.WriteLine($"graph     {Escaped.Of(source)}: {Counted.Of(g.NodeCount, "node")}, {Counted.Of(g.Edges.Count, "edge")}, {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}, {g.NodeCount - g.Outputs.Count} measured");
         o.WriteLine($"field     {r.Field.Name}    flow: {FlowKinds.Name(r.Kind)}");
         if (g.HasLabels)
             o.WriteLine("labels    " + string.Join(", ", MeasurementLabels.All.Skip(1)
                 .Select(l => (l, n: g.Labels.Values.Count(x => x == l))).Where(t => t.n > 0).Select(t => $"{t.n} {MeasurementLabels.Name(t.l)}")) + ", the rest XY");
         if (r.VanishedEdges.Count > 0)
-            o.WriteLine("warning   " + VanishingEdges.Warning(g, r.Field, r.VanishedEdges));
+            Terminal.Warn($"{source}: {VanishingEdges.Warning(g, r.Field, r.VanishedEdges)}");
         if (r.Obstruction is { } blocked)
         {
-            o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");
-            if (blocked.NodeWitnesses is { } perNode) o.WriteLine($"          {perNode.Count} witness(es), one per node, prove no node of it can be corrected (measurement labels)");
-            else if (r.Kind == FlowKind.General) o.WriteLine($"          {blocked.Witnesses.Count} left-kernel witness(es) prove no node of it can be corrected");
+            o.WriteLine($"verdict   NO FLOW: blocked set of {Counted.Of(blocked.Nodes.Count, "node")}: {Names(blocked.Nodes)}");
+            if (blocked.NodeWitnesses is { } perNode) o.WriteLine($"          {Counted.Of(perNode.Count, "witness", "witnesses")}, one per node, {(perNode.Count == 1 ? "proves" : "prove")} no node of it can be corrected (measurement labels)");
+            else if (r.Kind == FlowKind.General) o.WriteLine($"          {Counted.Of(blocked.Witnesses.Count, "left-kernel witness", "left-kernel witnesses")} {(blocked.Witnesses.Count == 1 ? "proves" : "prove")} no node of it can be corrected");
             else o.WriteLine("          every possible corrector touches zero or at least two of its nodes");
         }
         else
@@ -39,6 +40,6 @@ public static class Summary
                 o.WriteLine($"round {i + 1,-3} {Names(r.Rounds[i])}");
             if (r.Depth > MaxRoundsShown) o.WriteLine($"          ... {r.Depth - MaxRoundsShown} more rounds in the certificate");
         }
-        o.WriteLine(certificatePath is null ? "certificate not written (use --out FILE)" : $"certificate {certificatePath}");
+        o.WriteLine(certificatePath is null ? "certificate not written (use --out FILE)" : $"certificate {Escaped.Of(certificatePath)}");
     }
 }

@@ -8,8 +8,8 @@ namespace FlowCert.Simulation;
 /// through the node's Pauli frame. Outcome 0 and 1 of a label are |psi_0&gt;, |psi_1&gt;:
 /// XY: D^dagger Z^k |+&gt; (section 7); XZ: cos(t/2)|0&gt; + sin(t/2)|1&gt; and -sin(t/2)|0&gt; + cos(t/2)|1&gt;;
 /// YZ: cos(t/2)|0&gt; + i sin(t/2)|1&gt; and i sin(t/2)|0&gt; + cos(t/2)|1&gt;; X: |+&gt;, |-&gt;;
-/// Y: (|0&gt; + i|1&gt;)/sqrt 2, (|0&gt; - i|1&gt;)/sqrt 2; Z: |0&gt;, |1&gt;. The angle t is arg D_1 - arg D_0 of the
-/// node's random diagonal D. With frame X^a Z^b (the state is X^a Z^b applied to the ideal one), the node
+/// Y: (|0&gt; + i|1&gt;)/sqrt 2, (|0&gt; - i|1&gt;)/sqrt 2; Z: |0&gt;, |1&gt;. The angle t is arg D_0 - arg D_1 of the
+/// node's diagonal D, the same angle a as in the XY plane, where D = diag(1, e^(-i a)) (MeasurementAngles). With frame X^a Z^b (the state is X^a Z^b applied to the ideal one), the node
 /// is measured in the basis X^a Z^b |psi_k&gt;: the frame is applied as an operator to the basis, so no table
 /// of angle rules per label is needed, and outcome k is read as it is.
 /// </summary>
@@ -19,7 +19,7 @@ public static class LabelledBasis
     public static Complex[] Ket(MeasurementLabel label, IReadOnlyList<Complex> diagonal, int k)
     {
         double s2 = 1 / Math.Sqrt(2);
-        double t = diagonal[1].Phase - diagonal[0].Phase;
+        double t = diagonal[0].Phase - diagonal[1].Phase;
         double c = Math.Cos(t / 2), s = Math.Sin(t / 2);
         int sign = k == 0 ? 1 : -1;
         return label switch
