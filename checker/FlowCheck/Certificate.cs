@@ -18,11 +18,8 @@ public static class Certificate
         var flow = json.At("", "flow", "flow").String("flow");
         if (flow is not ("general" or "causal" or "pauli")) throw new InvalidCertificate($"unknown flow \"{Json.Cut(flow)}\" (expected general, causal or pauli)");
         var field = Field.Parse(json.At("", "field", "field").String("field"));
-        if (json.Find("", "producer"))
-        {
-            json.Known("producer", "producer", "name", "version");
-            foreach (var key in new[] { "name", "version" }) json.At("producer", key, $"producer.{key}").String($"producer.{key}");
-        }
+        if (json.Find("", "producer")) json.Known("producer", "producer", "name", "version");
+        foreach (var key in json.Find("", "producer") ? ["name", "version"] : new string[0]) json.At("producer", key, $"producer.{key}").String($"producer.{key}");
         var graph = EmbeddedGraph.Read(json);
         var claimed = json.At("", "graphSha256", "graphSha256").String("graphSha256");
         var hash = graph.Sha256();
@@ -32,7 +29,10 @@ public static class Certificate
         var labelled = graph.Labels.Count > 0 || flow == "pauli";
         if (labelled != (version == 2))
             throw new InvalidCertificate($"version {version}: version 2 is exactly for graphs with a label other than XY and for pauli flow");
-        if (labelled) Labelled.CheckHeader(graph, field, flow);
+        if (labelled && field.Name != "F2") throw new InvalidCertificate($"{flow} flow with labels over {field.Name}: labels and Pauli flow are defined for F2 only");
+        if (labelled && flow == "causal") throw new InvalidCertificate("causal flow with labels: causal flow is XY-only");
+        foreach (var (v, l) in graph.Labels.Where(kv => flow == "general" && kv.Value is "X" or "Y" or "Z"))
+            throw new InvalidCertificate($"general flow with {graph.Names[v]} labelled {l}: generalized flow takes the planes XY, XZ, YZ only");
         var g = new FieldGraph(graph, field);
         var verdict = json.At("", "verdict", "verdict").String("verdict");
         var causal = flow == "causal";

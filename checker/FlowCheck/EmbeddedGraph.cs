@@ -48,20 +48,16 @@ public static class EmbeddedGraph
                 if (Rational.ParseCanonical(e[2]) is not { } r || r.Num.IsZero)
                     throw new InvalidCertificate($"graph.edges[{i}]: weight \"{Json.Cut(e[2])}\" of {u} {v} is not a canonical non-zero rational");
                 weights[e[2]] = w = g.Weights.Count;
-                g.Weights.Add(r);
-                g.WeightText.Add(e[2]);
+                g.Weights.Add(r); g.WeightText.Add(e[2]);
             }
             if (i > 0 && (g.Edges[^1].U, g.Edges[^1].V).CompareTo((a, b)) >= 0)
                 throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} after {g.Names[g.Edges[^1].U]} {g.Names[g.Edges[^1].V]} (must be sorted, no duplicates)");
             g.Edges.Add((a, b, w));
         }
         if (!json.Find("graph", "labels")) return g;
-        foreach (var n in json.NodeMap("graph.labels"))
-        {
-            var label = json.String("graph.labels", n);
+        foreach (var (n, label) in json.NodeMap("graph.labels").Select(n => (n, json.String("graph.labels", n))))
             g.Labels[index.TryGetValue(n, out var v) && !g.Output[v] ? v : throw new InvalidCertificate($"graph.labels: {Json.Cut(n)} is not a measured node")] =
                 label != "XY" && OpenGraph.LabelNames.Contains(label) ? label : throw new InvalidCertificate($"graph.labels.{n}: \"{Json.Cut(label)}\" is not one of XZ, YZ, X, Y, Z (XY is not written)");
-        }
         return g.Labels.Count > 0 ? g : throw new InvalidCertificate("graph.labels is empty: it is written only when some node is not XY");
     }
 

@@ -17,8 +17,7 @@ public sealed class Field
     public static Field Parse(string text)
     {
         if (text == "Q") return new Field(text, 0);
-        var m = PrimeField.Match(text);
-        if (!m.Success) throw new InvalidCertificate($"unknown field \"{Json.Cut(text)}\" (expected \"Q\" or \"F\" and a prime)");
+        if (PrimeField.Match(text) is not { Success: true } m) throw new InvalidCertificate($"unknown field \"{Json.Cut(text)}\" (expected \"Q\" or \"F\" and a prime)");
         var p = BigInteger.Parse(m.Groups[1].Value);
         if (p >= Prime.Limit) throw new InvalidCertificate($"field {Json.Cut(text)}: p is beyond the deterministic primality test (< {Prime.Limit})");
         if (!Prime.IsPrime(p)) throw new InvalidCertificate($"field {text}: {p} is not a prime");
@@ -30,12 +29,7 @@ public sealed class Field
     public Rational Inverse(Rational a) => P.IsZero ? new Rational(a.Den, a.Num) : Residue(BigInteger.ModPow(a.Num, P - 2, P));
 
     /// <summary>The rational weight a/b read into the field (a * b^-1 mod p); null when p divides b.</summary>
-    public Rational? Reduce(Rational r)
-    {
-        if (P.IsZero) return r;
-        if ((r.Den % P).IsZero) return null;
-        return Residue(r.Num * BigInteger.ModPow(r.Den, P - 2, P));
-    }
+    public Rational? Reduce(Rational r) => P.IsZero ? r : (r.Den % P).IsZero ? null : Residue(r.Num * BigInteger.ModPow(r.Den, P - 2, P));
 
     /// <summary>Reads a canonical non-zero element: a reduced rational over Q, a residue 1..p-1 over F_p.</summary>
     /// <remarks>The answers for up to 4096 distinct short texts are remembered (a certificate repeats few values).</remarks>

@@ -18,9 +18,8 @@ public sealed class FieldGraph
         var kept = new List<(int U, int V, int W)>();
         foreach (var e in graph.Edges)
         {
-            var w = reduced[e.W] ??= field.Reduce(graph.Weights[e.W]) ?? throw new InvalidCertificate(
+            var w = values[e.W] = reduced[e.W] ??= field.Reduce(graph.Weights[e.W]) ?? throw new InvalidCertificate(
                 $"edge {Name(e.U)} {Name(e.V)}: weight {Json.Cut(graph.WeightText[e.W])} has no meaning in {field.Name} (p divides the denominator)");
-            values[e.W] = w;
             if (w.Num.IsZero) { Vanished.Add(e); continue; }
             kept.Add(e);
             (start[e.U + 1], start[e.V + 1]) = (start[e.U + 1] + 1, start[e.V + 1] + 1);
@@ -28,11 +27,7 @@ public sealed class FieldGraph
         for (var i = 0; i < n; i++) start[i + 1] += start[i];
         (adjacent, weight) = (new int[start[n]], new int[start[n]]);
         var fill = start[..n];
-        foreach (var (u, v, w) in kept)
-        {
-            (adjacent[fill[u]], weight[fill[u]++]) = (v, w);
-            (adjacent[fill[v]], weight[fill[v]++]) = (u, w);
-        }
+        foreach (var (u, v, w) in kept) { (adjacent[fill[u]], weight[fill[u]++]) = (v, w); (adjacent[fill[v]], weight[fill[v]++]) = (u, w); }
     }
 
     public int Count => Graph.Names.Length;

@@ -36,12 +36,8 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress, bool
     {
         if (nodes.Count == 0) throw new InvalidCertificate($"round {r} is empty");
         Json.SortedUnique(nodes, $"round {r}");
-        foreach (var name in nodes)
-        {
-            var v = g.Measured(name, $"round {r}");
-            if (round[v] != 0) throw new InvalidCertificate($"node {name} is in round {round[v]} and in round {r}");
-            round[v] = r;
-        }
+        foreach (var v in nodes.Select(name => g.Measured(name, $"round {r}")))
+            round[v] = round[v] == 0 ? r : throw new InvalidCertificate($"node {g.Name(v)} is in round {round[v]} and in round {r}");
     }
 
     /// <summary>An output, or a measured node in a strictly later round.</summary>
@@ -49,8 +45,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress, bool
 
     void CheckCorrection(int v, Json json)
     {
-        var name = g.Name(v);
-        c.Clear();
+        var name = g.Name(v); c.Clear();
         foreach (var key in json.NodeMap("corrections", name))
         {
             var text = json.String($"corrections.{name}", key);
@@ -62,9 +57,8 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress, bool
         }
         if (labelled) { Labelled.CheckCorrection(g, v, c.Select(e => e.U).ToHashSet(), u => IsLater(u, v), $"node {name} (round {round[v]})"); return; }
         if (causal) CheckCausal(v, name);
-        foreach (var (u, x) in c)
-            foreach (var (w, a) in g.Neighbours(u))
-                g.Add(product, w, g.Field.Mul(a, x));
+        foreach (var (x, (w, a)) in c.SelectMany(e => g.Neighbours(e.U).Select(n => (e.X, n))))
+            g.Add(product, w, g.Field.Mul(a, x));
         var self = product.GetValueOrDefault(v, Rational.Zero);
         if (self != Rational.One) throw new InvalidCertificate($"node {name}: (A c_{name})({name}) = {self.Show()}, not 1");
         foreach (var w in product.Keys.Order())

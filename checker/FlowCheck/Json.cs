@@ -36,12 +36,7 @@ public sealed class Json : IDisposable
     public void Dispose() => stream.Dispose();
 
     /// <summary>Reads the whole document once; throws <see cref="UnreadableInput"/> at the first fault, with line and column.</summary>
-    public void Validate()
-    {
-        Seek((0, 1, 1));
-        Skip(0, "");
-        if (Kind(end: true) != "end") throw Syntax("content after the JSON value");
-    }
+    public void Validate() { Seek((0, 1, 1)); Skip(0, ""); if (Kind(end: true) != "end") throw Syntax("content after the JSON value"); }
 
     void Skip(int depth, string at)
     {
@@ -50,8 +45,7 @@ public sealed class Json : IDisposable
         {
             case "object":
                 while (keySets.Count <= depth) keySets.Add(new(StringComparer.Ordinal));
-                var keys = keySets[depth];
-                keys.Clear();
+                var keys = keySets[depth]; keys.Clear();
                 foreach (var key in Object())
                 {
                     if (!keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
@@ -134,11 +128,7 @@ public sealed class Json : IDisposable
     }
 
     /// <summary>After a member or item: a comma (then another must follow) or the closing bracket.</summary>
-    bool Next(char close)
-    {
-        var b = Space() is var next && (next == ',' || next == close) ? Take() : throw Syntax($"expected ',' or '{close}'");
-        return b == ',';
-    }
+    bool Next(char close) => (Space() is var next && (next == ',' || next == close) ? Take() : throw Syntax($"expected ',' or '{close}'")) == ',';
 
     /// <summary>A string; the usual case, a string without escapes inside the buffer, is decoded in place.
     /// Without <paramref name="keep"/> it is only validated (null is returned).</summary>
@@ -195,8 +185,7 @@ public sealed class Json : IDisposable
         var text = new StringBuilder();
         void Digits() { if (Peek() is < '0' or > '9') throw Syntax("a digit must follow"); while (Peek() is >= '0' and <= '9') text.Append((char)Take()); }
         if (Peek() == '-') text.Append((char)Take());
-        if (Peek() == '0') text.Append((char)Take());
-        else Digits();
+        if (Peek() == '0') text.Append((char)Take()); else Digits();
         var integer = true;
         if (Peek() == '.') { text.Append((char)Take()); Digits(); integer = false; }
         if (Peek() is not ('e' or 'E')) return (text.ToString(), integer);
@@ -240,11 +229,8 @@ public sealed class Json : IDisposable
 
     public string String(string what, string? key = null, int index = -1) { Expecting("string", what, "a string", key, index); return ReadString()!; }
 
-    public BigInteger Integer(string what)
-    {
-        Expecting("number", what, "an integer");
-        return Number() is (var text, true) ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float");
-    }
+    public BigInteger Integer(string what) { Expecting("number", what, "an integer");
+        return Number() is (var text, true) ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float"); }
 
     /// <summary>Items of an array; the caller reads each item before asking for the next.</summary>
     public IEnumerable<int> Items(string what, int index = -1) { Expecting("array", what, "an array", null, index); return Array(); }
@@ -255,13 +241,7 @@ public sealed class Json : IDisposable
 
     /// <summary>The keys of an object (the caller reads each value), and a boolean.</summary>
     public IEnumerable<string> Members(string what) { Expecting("object", what, "an object"); return Object(); }
-    public bool Boolean(string what)
-    {
-        if (Kind() is not ("true" or "false")) Expecting("boolean", what, "true or false");
-        var value = Kind() == "true";
-        foreach (var _ in value ? "true" : "false") Take();
-        return value;
-    }
+    public bool Boolean(string what) { var k = Kind(); if (k is not ("true" or "false")) Expecting("boolean", what, "true or false"); foreach (var _ in k) Take(); return k == "true"; }
 
     /// <summary>Keys of an object keyed by node names, required strictly increasing (sorted, no duplicates).</summary>
     public IEnumerable<string> NodeMap(string what, string? owner = null)

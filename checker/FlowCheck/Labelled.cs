@@ -1,38 +1,25 @@
 namespace FlowCheck;
 
-/// <summary>Measurement labels over F2 (flows.md section 9): which certificates may carry them, the
+/// <summary>Measurement labels over F2 (flows.md section 9; Certificate.cs says which certificates may carry them): the
 /// conditions of generalized flow with planes (9.2) and Pauli flow (9.3) on one correction set, and the
 /// per-node witnesses of a proof of absence (9.5, the systems of docs/algorithms.md).</summary>
 public static class Labelled
 {
-    public static void CheckHeader(Graph graph, Field field, string flow)
-    {
-        if (field.Name != "F2") throw new InvalidCertificate($"{flow} flow with labels over {field.Name}: labels and Pauli flow are defined for F2 only");
-        if (flow == "causal") throw new InvalidCertificate("causal flow with labels: causal flow is XY-only");
-        foreach (var (v, l) in graph.Labels.Where(kv => flow == "general" && kv.Value is "X" or "Y" or "Z"))
-            throw new InvalidCertificate($"general flow with {graph.Names[v]} labelled {l}: generalized flow takes the planes XY, XZ, YZ only");
-    }
-
     /// <summary>P1-P9 of flows.md 9.3 (with plane labels only they are G1-G3 of 9.2), for v and its set p;
     /// Odd(p) is the set of nodes with an odd number of neighbours in p (weights non-zero in F2).</summary>
     public static void CheckCorrection(FieldGraph g, int v, HashSet<int> p, Func<int, bool> later, string who)
     {
-        var odd = new HashSet<int>();
-        foreach (var u in p)
-            foreach (var (w, _) in g.Neighbours(u))
-                if (!odd.Add(w)) odd.Remove(w);
+        var odd = p.SelectMany(u => g.Neighbours(u)).GroupBy(e => e.Node).Where(e => e.Count() % 2 == 1).Select(e => e.Key).ToHashSet();
         string name = g.Name(v), l;
-        for (var w = 0; w < g.Count; w++)
+        foreach (var w in Enumerable.Range(0, g.Count).Where(w => w != v && !g.IsOutput(w) && !later(w)))
         {
-            if (w == v || g.IsOutput(w) || later(w)) continue;
             if (p.Contains(w) && (l = g.Graph.Label(w)) is not ("X" or "Y")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in p_{name} but not later");
             if (odd.Contains(w) && (l = g.Graph.Label(w)) is not ("Y" or "Z")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in Odd(p_{name}) but not later");
             if (g.Graph.Label(w) == "Y" && p.Contains(w) != odd.Contains(w))
                 throw new InvalidCertificate($"{who}: {g.Name(w)} is labelled Y and not later, but is in only one of p_{name} and Odd(p_{name})");
         }
         bool inP = p.Contains(v), inOdd = odd.Contains(v);
-        var ok = (l = g.Graph.Label(v)) switch { "XY" => !inP && inOdd, "XZ" => inP && inOdd, "YZ" => inP && !inOdd, "X" => inOdd, "Z" => inP, _ => inP != inOdd };
-        if (!ok) throw new InvalidCertificate($"{who}: labelled {l}, but {name} in p_{name} is {inP} and {name} in Odd(p_{name}) is {inOdd}");
+        if (!((l = g.Graph.Label(v)) switch { "XY" => !inP && inOdd, "XZ" => inP && inOdd, "YZ" => inP && !inOdd, "X" => inOdd, "Z" => inP, _ => inP != inOdd })) throw new InvalidCertificate($"{who}: labelled {l}, but {name} in p_{name} is {inP} and {name} in Odd(p_{name}) is {inOdd}");
     }
 
     /// <summary>Flows.md 9.5: for each v in U, y_v (rows of v's system, and its self row) has y^T M_v = 0 and y^T b_v = 1.</summary>
@@ -51,8 +38,7 @@ public static class Labelled
             Json.SortedUnique(rows, $"{what}.rows");
             var (lv, sum, rhs) = (g.Graph.Label(v), new int[g.Count], self.Value);
             var hasSelfRow = lv is "XZ" or "YZ" or "Z";
-            if (rhs && !hasSelfRow) throw new InvalidCertificate($"{what}: {key} is labelled {lv} and has no self row");
-            if (rhs) sum[v] = 1;
+            if (rhs) sum[v] = hasSelfRow ? 1 : throw new InvalidCertificate($"{what}: {key} is labelled {lv} and has no self row");
             foreach (var row in rows)
             {
                 if (!g.Graph.Index.TryGetValue(row, out var r) || !u[r] || g.Graph.Label(r) == "Z") throw new InvalidCertificate($"{what}: {Json.Cut(row)} has no row in the system of {key}");

@@ -9,18 +9,12 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress, bo
     /// <summary>Returns the size of the blocked set proven, or throws naming the first failure.</summary>
     public int Check(Json json)
     {
-        if (causal) json.Known("obstruction", "obstruction", "blocked");
-        else json.Known("obstruction", "obstruction", "blocked", "witnesses");
+        json.Known("obstruction", "obstruction", causal ? ["blocked"] : ["blocked", "witnesses"]);
         var names = json.At("obstruction", "blocked", "obstruction.blocked").Strings("obstruction.blocked");
         if (names.Count == 0) throw new InvalidCertificate("obstruction.blocked is empty");
         Json.SortedUnique(names, "obstruction.blocked");
-        var blocked = new List<int>();
-        foreach (var name in names)
-        {
-            var v = g.Measured(name, "obstruction.blocked");
-            blocked.Add(v);
-            inU[v] = true;
-        }
+        var blocked = names.Select(name => g.Measured(name, "obstruction.blocked")).ToList();
+        foreach (var v in blocked) inU[v] = true;
         if (labelled) Labelled.CheckWitnesses(g, json, blocked, inU);
         else if (causal) CheckCausal(blocked);
         else CheckWitnesses(json, blocked);
@@ -33,22 +27,15 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress, bo
     void CheckCausal(List<int> blocked)
     {
         var count = new int[g.Count];
-        foreach (var x in blocked)
-            foreach (var (w, _) in g.Neighbours(x).Where(e => IsCorrector(e.Node)))
-                count[w]++;
-        for (var w = 0; w < g.Count; w++)
-            if (count[w] == 1)
-            {
-                var x = blocked.First(x => g.Neighbours(x).Any(e => e.Node == w));
-                throw new InvalidCertificate($"corrector {g.Name(w)} has exactly one neighbour in the blocked set ({g.Name(x)}), so it could correct {g.Name(x)}");
-            }
+        foreach (var (w, _) in blocked.SelectMany(x => g.Neighbours(x)).Where(e => IsCorrector(e.Node))) count[w]++;
+        foreach (var (w, x) in Enumerable.Range(0, g.Count).Where(w => count[w] == 1).Select(w => (w, blocked.First(x => g.Neighbours(x).Any(e => e.Node == w)))))
+            throw new InvalidCertificate($"corrector {g.Name(w)} has exactly one neighbour in the blocked set ({g.Name(x)}), so it could correct {g.Name(x)}");
     }
 
     /// <summary>Each witness y has y^T A[U, C] = 0, entries non-zero on U; the supports cover U.</summary>
     void CheckWitnesses(Json json, List<int> blocked)
     {
-        var covered = new bool[g.Count];
-        var product = new Dictionary<int, Rational>();
+        var (covered, product) = (new bool[g.Count], new Dictionary<int, Rational>());
         foreach (var i in json.At("obstruction", "witnesses", "obstruction.witnesses").Items("obstruction.witnesses"))
         {
             var what = $"obstruction.witnesses[{i}]";

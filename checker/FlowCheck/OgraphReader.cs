@@ -11,11 +11,9 @@ public static class OgraphReader
     {
         string text;
         try { text = File.ReadAllText(path); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        { throw new UnreadableInput($"{path}: {e.Message}"); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UnreadableInput($"{path}: {e.Message}"); }
         var nodes = new HashSet<string>();
-        var inputs = new Dictionary<string, int>();
-        var outputs = new Dictionary<string, int>();
+        var (inputs, outputs) = (new Dictionary<string, int>(), new Dictionary<string, int>());
         var edges = new Dictionary<(string, string), (Rational W, int Line)>();
         var mentions = new List<(string Name, int Line, int Column)>();
         var labels = new Dictionary<string, (string Label, int Line, int Column)>();
@@ -32,11 +30,8 @@ public static class OgraphReader
                 case "input" or "output":
                     var seen = tokens[0].Text == "input" ? inputs : outputs;
                     for (var k = 1; k < tokens.Count; k++)
-                    {
-                        var name = NameAt(k);
-                        if (!seen.TryAdd(name, line)) throw Error(k, $"{name} listed twice as {tokens[0].Text} (lines {seen[name]} and {line})");
-                        mentions.Add((name, line, tokens[k].Column));
-                    }
+                        mentions.Add((seen.TryAdd(NameAt(k), line) ? tokens[k].Text
+                            : throw Error(k, $"{tokens[k].Text} listed twice as {tokens[0].Text} (lines {seen[tokens[k].Text]} and {line})"), line, tokens[k].Column));
                     break;
                 case "node":
                     for (var k = 1; k < tokens.Count; k++) nodes.Add(NameAt(k));
@@ -50,8 +45,7 @@ public static class OgraphReader
                     var key = string.CompareOrdinal(u, v) < 0 ? (u, v) : (v, u);
                     if (edges.TryGetValue(key, out var first)) throw Error(0, $"edge {u} {v} given twice (lines {first.Line} and {line})");
                     edges[key] = (weight, line);
-                    nodes.Add(u);
-                    nodes.Add(v);
+                    nodes.UnionWith([u, v]);
                     break;
                 case "at":
                     if (tokens.Count != 4) throw Error(0, "wrong number of tokens: at NODE X Y");
@@ -78,11 +72,8 @@ public static class OgraphReader
         var edgeList = edges.Select(e => new Edge(e.Key.Item1, e.Key.Item2, e.Value.W))
             .OrderBy(e => e.U, StringComparer.Ordinal).ThenBy(e => e.V, StringComparer.Ordinal).ToList();
         var graph = new OpenGraph(Sorted(inputs.Keys), Sorted(outputs.Keys), Sorted(nodes), edgeList);
-        foreach (var (node, (label, line, column)) in labels)
-        {
-            if (outputs.ContainsKey(node)) throw new UnreadableInput($"{path}:{line}:{column}: label on output {node}");
-            if (label != "XY") graph.Labels[node] = label;
-        }
+        foreach (var (node, (_, line, column)) in labels.Where(l => outputs.ContainsKey(l.Key))) throw new UnreadableInput($"{path}:{line}:{column}: label on output {node}");
+        foreach (var (node, (label, _, _)) in labels.Where(l => l.Value.Label != "XY")) graph.Labels[node] = label;
         return graph;
     }
 
@@ -92,10 +83,6 @@ public static class OgraphReader
     static List<(string Text, int Column)> Tokens(string line)
     {
         var hash = line.IndexOf('#');
-        if (hash >= 0) line = line[..hash];
-        var tokens = new List<(string, int)>();
-        foreach (Match m in Regex.Matches(line, @"[^ \t]+"))
-            tokens.Add((m.Value, m.Index + 1));
-        return tokens;
+        return Regex.Matches(hash >= 0 ? line[..hash] : line, @"[^ \t]+").Select(m => (m.Value, m.Index + 1)).ToList();
     }
 }

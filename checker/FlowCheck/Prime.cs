@@ -16,12 +16,9 @@ public static class Prime
         if (n < 2) return false;
         foreach (var b in Bases)
             if (n % b == 0) return n == b;
-        var d = n - 1;
-        var s = 0;
+        var (d, s) = (n - 1, 0);
         while (d.IsEven) { d >>= 1; s++; }
-        foreach (var b in Bases)
-            if (!PassesRound(n, d, s, b)) return false;
-        return true;
+        return Bases.All(b => PassesRound(n, d, s, b));
     }
 
     /// <summary>One strong-probable-prime round: b^d = 1, or b^(d 2^i) = n - 1 for some i &lt; s.</summary>
@@ -29,11 +26,7 @@ public static class Prime
     {
         var x = BigInteger.ModPow(b, d, n);
         if (x.IsOne) return true;
-        for (var i = 0; i < s; i++)
-        {
-            if (x == n - 1) return true;
-            x = x * x % n;
-        }
+        for (var i = 0; i < s; i++, x = x * x % n) if (x == n - 1) return true;
         return false;
     }
 }

@@ -14,24 +14,14 @@ public static class Program
     {
         if (args is ["--help" or "-h"])
         {
-            stdout.WriteLine(Usage);
-            stdout.WriteLine("Checks a flowcert certificate: exit 0 valid, 1 invalid, 2 unreadable input.");
-            stdout.WriteLine("--graph GRAPH: the certificate must be about exactly this .ograph file.");
-            stdout.WriteLine("--quiet: no progress lines on a terminal.");
+            foreach (var text in new[] { Usage, "Checks a flowcert certificate: exit 0 valid, 1 invalid, 2 unreadable input.",
+                "--graph GRAPH: the certificate must be about exactly this .ograph file.", "--quiet: no progress lines on a terminal." }) stdout.WriteLine(text);
             return 0;
         }
-        if (args is ["--version"])
-        {
-            stdout.WriteLine($"flowcheck {typeof(Program).Assembly.GetName().Version?.ToString(3)}");
-            return 0;
-        }
-        var quiet = args.Contains("--quiet");
+        if (args is ["--version"]) { stdout.WriteLine($"flowcheck {typeof(Program).Assembly.GetName().Version?.ToString(3)}"); return 0; }
         if (Arguments(args.Where(a => a != "--quiet").ToArray()) is not var (certPath, graphPath))
-        {
-            stderr.WriteLine(Usage);
-            return 2;
-        }
-        var progress = new Progress(terminal && !quiet ? stderr : null);
+        { stderr.WriteLine(Usage); return 2; }
+        var progress = new Progress(terminal && !args.Contains("--quiet") ? stderr : null);
         try
         {
             var fileGraph = graphPath is null ? null : OgraphReader.Read(graphPath);
@@ -54,11 +44,9 @@ public static class Program
     {
         string? cert = null, graph = null;
         for (var i = 0; i < args.Length; i++)
-        {
             if (args[i] == "--graph" && i + 1 < args.Length && graph is null) graph = args[++i];
             else if (!args[i].StartsWith('-') && cert is null) cert = args[i];
             else return null;
-        }
         return cert is null ? null : (cert, graph);
     }
 }
@@ -78,9 +66,5 @@ public sealed class Progress(TextWriter? terminal)
         terminal.Write($"\rflowcheck: {what}: {done:N0} of {total:N0}, {now / 1000.0:F1} s elapsed   ");
     }
 
-    public void Done()
-    {
-        if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r");
-        shown = -1;
-    }
+    public void Done() { if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r"); shown = -1; }
 }

@@ -16,8 +16,7 @@ public readonly record struct Rational
     {
         if (den.Sign < 0) { num = -num; den = -den; }
         var gcd = BigInteger.GreatestCommonDivisor(num, den);
-        Num = num / gcd;
-        Den = den / gcd;
+        (Num, Den) = (num / gcd, den / gcd);
     }
 
     public static readonly Rational Zero = new(0, 1);
@@ -37,15 +36,10 @@ public readonly record struct Rational
     /// <summary>Reads a weight of the graph file grammar: "-3", "1/2", "0.25"; null when malformed.</summary>
     public static Rational? ParseWeight(string text)
     {
-        var m = Weight.Match(text);
-        if (!m.Success) return null;
+        if (Weight.Match(text) is not { Success: true } m) return null;
         var sign = m.Groups[1].Length == 1 ? BigInteger.MinusOne : BigInteger.One;
         var whole = sign * BigInteger.Parse(m.Groups[2].Value);
-        if (m.Groups[3].Success)
-        {
-            var den = BigInteger.Parse(m.Groups[3].Value);
-            return den.IsZero ? null : new Rational(whole, den);
-        }
+        if (m.Groups[3].Success) return BigInteger.Parse(m.Groups[3].Value) is var den && den.IsZero ? null : new Rational(whole, den);
         if (!m.Groups[4].Success) return new Rational(whole, 1);
         var scale = BigInteger.Pow(10, m.Groups[4].Length);
         return new Rational(whole * scale + sign * BigInteger.Parse(m.Groups[4].Value), scale);
@@ -58,8 +52,7 @@ public readonly record struct Rational
         if (text.Length is > 0 and < 19 && long.TryParse(text, CultureInfo.InvariantCulture, out var small) && small.ToString(CultureInfo.InvariantCulture) == text) return new Rational(small, 1);
         if (!CanonicalShape.IsMatch(text) || ParseWeight(text) is not { } r) return null;
         var slash = text.IndexOf('/');
-        if (slash < 0) return r;
-        return !r.Den.IsOne && r.Den == BigInteger.Parse(text.AsSpan(slash + 1)) ? r : null;
+        return slash < 0 ? r : !r.Den.IsOne && r.Den == BigInteger.Parse(text.AsSpan(slash + 1)) ? r : null;
     }
 
     static readonly Regex CanonicalShape = new(@"^(0|-?[1-9][0-9]*)(/[1-9][0-9]*)?\z");
