@@ -78,7 +78,7 @@ public sealed class Json : IDisposable
     {
         if (pos < length) return buffer[pos];
         (length, pos) = (stream.Read(buffer), 0);
-        progress.Report("bytes read", stream.Position, stream.Length);
+        if (progress.Due) progress.Show($"reading: byte {stream.Position:N0} of {stream.Length:N0}");
         return length > 0 ? buffer[0] : -1;
     }
 
