@@ -5,13 +5,26 @@ namespace FlowCheck;
 /// <summary>The command line: flowcheck CERT [--graph GRAPH] [--quiet]. Exit 0 valid, 1 invalid, 2 unreadable input.</summary>
 public static class Program
 {
-    public const string Usage = "usage: flowcheck CERT [--graph GRAPH] [--quiet]";
+    public const string Usage = "usage: flowcheck CERT [--graph GRAPH] [--quiet] | --help | --version";
 
     public static int Main(string[] args) => Run(args, Console.Out, Console.Error, !Console.IsErrorRedirected);
 
     /// <summary>Runs the checker; <paramref name="terminal"/> (standard error is a terminal) allows progress lines.</summary>
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool terminal = false)
     {
+        if (args is ["--help" or "-h"])
+        {
+            stdout.WriteLine(Usage);
+            stdout.WriteLine("Checks a flowcert certificate: exit 0 valid, 1 invalid, 2 unreadable input.");
+            stdout.WriteLine("--graph GRAPH: the certificate must be about exactly this .ograph file.");
+            stdout.WriteLine("--quiet: no progress lines on a terminal.");
+            return 0;
+        }
+        if (args is ["--version"])
+        {
+            stdout.WriteLine($"flowcheck {typeof(Program).Assembly.GetName().Version?.ToString(3)}");
+            return 0;
+        }
         var quiet = args.Contains("--quiet");
         if (Arguments(args.Where(a => a != "--quiet").ToArray()) is not var (certPath, graphPath))
         {

@@ -37,14 +37,17 @@ public static class SolveCommand
         var clock = Stopwatch.StartNew();
         double parseSeconds, solveSeconds, writeSeconds;
         FlowResult result;
-        using (var progress = terminal is null ? null : new TerminalProgress(terminal, "flowcert solve", $"reading {graphPath}"))
+        using (var progress = terminal is null ? null : new TerminalProgress(terminal, "flowcert solve", $"reading {GraphInput.NameOf(graphPath)}"))
         {
-            var g = GraphFiles.Read(graphPath, inputs, outputs);
+            var g = GraphInput.Read(graphPath, inputs, outputs);
             parseSeconds = clock.Elapsed.TotalSeconds;
+            if (g.Inputs.Count == 0 && g.Outputs.Count == 0 && g.NodeCount > 0)
+                Terminal.Warn($"{GraphInput.NameOf(graphPath)}: no terminals were given (no inputs and no outputs), so every node is measured; " +
+                              "graph6, sparse6 and Matrix Market files carry none: name them with --inputs and --outputs");
             clock.Restart();
             progress?.Phase("solving");
             try { result = FlowSolver.Solve(g, spec, kind, progress); }
-            catch (WeightNotInFieldException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
+            catch (WeightNotInFieldException e) { throw new UserInputException($"{GraphInput.NameOf(graphPath)}: {e.Message}"); }
             solveSeconds = clock.Elapsed.TotalSeconds;
             clock.Restart();
             progress?.Phase($"writing {outPath}");
@@ -52,7 +55,7 @@ public static class SolveCommand
             writeSeconds = clock.Elapsed.TotalSeconds;
         }
         if (json) WriteJson(stdout, result, parseSeconds, solveSeconds, writeSeconds);
-        else Summary.Write(stdout, graphPath, result, outPath);
+        else Summary.Write(stdout, GraphInput.NameOf(graphPath), result, outPath);
         return result.HasFlow ? ExitCode.Flow : ExitCode.NoFlow;
     }
 
