@@ -68,11 +68,7 @@ public sealed class Json : IDisposable
 
     long Position => stream.Position - length + pos;
 
-    bool Seek((long Offset, int Line, int Column) at)
-    {
-        (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column);
-        return true;
-    }
+    bool Seek((long Offset, int Line, int Column) at) { (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column); return true; }
 
     int Peek()
     {

@@ -79,9 +79,5 @@ public sealed class Progress(TextWriter? terminal)
         terminal!.Write($"\r{$"flowcheck: {what}, {shown / 1000.0:F1} s elapsed",-79}");
     }
 
-    public void Done()
-    {
-        if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r");
-        shown = -1;
-    }
+    public void Done() { if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r"); shown = -1; }
 }
