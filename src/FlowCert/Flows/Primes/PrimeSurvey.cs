@@ -49,7 +49,10 @@ public sealed class PrimeSurvey
             for (int k = 0; k < run.Blocks.Count; k++)
             {
                 var (minor, unsolvable) = run.Blocks[k];
-                raw.Add((IntegerOrigin.PivotMinor, k + 1, $"layer {k + 1} block", minor));
+                // The rank matters only where some row is solvable (docs/primes.md, Lemma 3): not at the step
+                // that finds nothing, where Lemma 4 alone keeps every row unsolvable.
+                if (k < run.Layers.Count)
+                    raw.Add((IntegerOrigin.PivotMinor, k + 1, $"layer {k + 1} block", minor));
                 foreach (var (node, gcd) in unsolvable)
                     raw.Add((IntegerOrigin.KernelCoordinate, k + 1, $"layer {k + 1} row {graph.Names[node]}", gcd));
             }
