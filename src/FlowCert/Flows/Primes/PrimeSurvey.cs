@@ -76,7 +76,8 @@ public sealed class PrimeSurvey
             foreach (var p in f.ProbablePrimes)
                 unclassified.TryAdd(p, "a probable prime (Baillie-PSW) of 2^64 or more: beyond the solver's F_p arithmetic, so not solved");
             foreach (var c in f.Unfactored)
-                unclassified.TryAdd(c, $"composite, not factored within the {budget.Limit.TotalSeconds:0.###} s budget: primes dividing it are not classified");
+                unclassified.TryAdd(c, string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"composite, not factored within the {budget.Limit.TotalSeconds:0.###} s budget: primes dividing it are not classified"));
         }
         return new PrimeSurvey
         {
