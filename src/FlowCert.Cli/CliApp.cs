@@ -47,6 +47,7 @@ public static class CliApp
         root.Subcommands.Add(GenerateCommand.Create(stdout));
         root.Subcommands.Add(ConvertCommand.Create(stdout));
         root.Subcommands.Add(DrawCommand.Create(stdout));
+        root.Subcommands.Add(CircuitCommand.Create(stdout));
         root.Subcommands.Add(PrimesCommand.Create(stdout));
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
