@@ -50,6 +50,8 @@ public static class DemoCommand
             o.WriteLine();
         }
         WritePrimeSurveyScene(outDir, o);
+        o.Write(NoiseScene.Text());
+        o.WriteLine();
         o.WriteLine($"{written} certificates written to {Escaped.Of(outDir)}/ ; check one with: dotnet run --project checker/FlowCheck -- {Escaped.Of(outDir)}/splitter-pair.Q.general.json");
         return ExitCode.Flow;
     }
