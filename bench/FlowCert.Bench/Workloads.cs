@@ -17,5 +17,22 @@ public static class Workloads
         Family = "random", Size = n.ToString(), Probability = "1/2", InputCount = n / 6, OutputCount = n / 3, Seed = 7,
     });
 
+    /// <summary>
+    /// A random band graph: nodes v0..v(n-1), each pair at distance 1..bandwidth-1 joined with probability
+    /// 1/2 (seed 11) and every pair at distance exactly bandwidth joined, the first bandwidth/2 nodes
+    /// inputs and the last bandwidth nodes outputs. Its flow has about n / bandwidth - 1 layers, each found
+    /// on a dense bandwidth x bandwidth block (triangular with a full anti-diagonal, so of full rank).
+    /// </summary>
+    public static OpenGraph Band(int n, int bandwidth)
+    {
+        var names = Enumerable.Range(0, n).Select(i => "v" + i.ToString("D5", System.Globalization.CultureInfo.InvariantCulture)).ToArray();
+        var rng = new Random(11);
+        var edges = new List<(string, string, Rational)>();
+        for (int i = 0; i < n; i++)
+            for (int j = i + 1; j <= Math.Min(n - 1, i + bandwidth); j++)
+                if (j == i + bandwidth || rng.Next(2) == 1) edges.Add((names[i], names[j], Rational.One));
+        return new OpenGraph(names, edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth));
+    }
+
     public static FieldSpec Field(string name) => FieldSpec.Parse(name);
 }

@@ -48,6 +48,7 @@ public static class CliApp
         root.Subcommands.Add(ConvertCommand.Create(stdout));
         root.Subcommands.Add(DrawCommand.Create(stdout));
         root.Subcommands.Add(CircuitCommand.Create(stdout));
+        root.Subcommands.Add(PrimesCommand.Create(stdout));
         root.Subcommands.Add(NoiseCommand.Create(stdout));
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)

@@ -75,10 +75,9 @@ public class ProgramTests
     [InlineData("", "not JSON")]
     [InlineData("{", "not JSON")]
     [InlineData("{\"format\": \"flowcert-certificate\", \"format\": \"flowcert-certificate\"}", "not JSON")]
-    [InlineData("{} {}", "not JSON: Additional text encountered")]
+    [InlineData("{} {}", ":1:4: not JSON: content after the JSON value")]
     [InlineData("{} /* c */", "content after the JSON value")]
     [InlineData("{} x", "not JSON")]
-    [InlineData("{\"version\": 1e999999}", "not JSON")]
     public void TextThatIsNotOneJsonDocumentIsUnreadable(string text, string message)
     {
         var r = CheckText(text);

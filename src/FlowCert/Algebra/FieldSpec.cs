@@ -47,9 +47,14 @@ public sealed record FieldSpec
         return new FieldSpec(p);
     }
 
-    /// <summary>Calls the visitor with the concrete field type (the one place where Q and F_p are told apart).</summary>
+    /// <summary>
+    /// Calls the visitor with the concrete field type: the one place where Q, F_2 and the other F_p are
+    /// told apart (each field type brings its own elimination kernel, <see cref="IField{T}.Eliminate"/>).
+    /// </summary>
     public TResult Accept<TResult>(IFieldVisitor<TResult> visitor)
-        => IsRationals ? visitor.Visit<Rational, RationalField>(default) : visitor.Visit<ulong, PrimeField>(new PrimeField(Prime));
+        => IsRationals ? visitor.Visit<Rational, RationalField>(default)
+            : Prime == 2 ? visitor.Visit<ulong, BinaryField>(default)
+            : visitor.Visit<ulong, PrimeField>(new PrimeField(Prime));
 }
 
 /// <summary>Generic code to run over whichever field a <see cref="FieldSpec"/> names.</summary>

@@ -17,15 +17,11 @@ internal interface IEliminationResult<T> where T : struct
     Dictionary<int, SparseVector<T>> SolveUnitVectors();
 }
 
-/// <summary>Chooses how to eliminate a block: sparse rows in general, packed bits for dense blocks over F_2.</summary>
+/// <summary>The entry point of block elimination: the field's own kernel (<see cref="IField{T}.Eliminate"/>).</summary>
 internal static class Elimination
 {
     /// <summary>Eliminates the matrix whose rows are <paramref name="rows"/> over <paramref name="field"/>.</summary>
     public static IEliminationResult<T> Run<T, TField>(TField field, IReadOnlyList<SparseVector<T>> rows)
         where T : struct where TField : struct, IField<T>
-    {
-        if (field is PrimeField { P: 2 } && typeof(T) == typeof(ulong) && BitElimination.PaysOff(rows.Select(r => r.Indices).ToList()))
-            return (IEliminationResult<T>)(object)new BitElimination(rows.Select(r => r.Indices).ToList());
-        return new SparseElimination<T, TField>(field, rows);
-    }
+        => field.Eliminate(rows);
 }

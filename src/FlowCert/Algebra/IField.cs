@@ -32,6 +32,13 @@ public interface IField<T> where T : struct
     string Format(T a);
     /// <summary>Parses the canonical text of an element; false when it is not canonical.</summary>
     bool TryParse(string text, out T value);
+    /// <summary>
+    /// Eliminates a block B (one sparse row per entry) with this field's kernel: sparse rows for sparse
+    /// blocks; for dense ones packed bits over F_2, word-sized residues over F_p, several primes over Q.
+    /// Every kernel gives the same canonical solutions (<see cref="IEliminationResult{T}"/>). Internal:
+    /// only the library's own fields implement it.
+    /// </summary>
+    internal IEliminationResult<T> Eliminate(IReadOnlyList<SparseVector<T>> rows);
 }
 
 /// <summary>A rational that has no image in the field (its denominator is divisible by p).</summary>

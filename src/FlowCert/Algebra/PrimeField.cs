@@ -77,4 +77,8 @@ public readonly struct PrimeField : IField<ulong>
         foreach (var c in text) if (c < '0' || c > '9') return false;
         return ulong.TryParse(text, out value) && value < P;
     }
+
+    /// <inheritdoc/>
+    IEliminationResult<ulong> IField<ulong>.Eliminate(IReadOnlyList<SparseVector<ulong>> rows)
+        => ModularElimination.PaysOff(rows) ? ModularElimination.Run(P, rows) : new SparseElimination<ulong, PrimeField>(this, rows);
 }

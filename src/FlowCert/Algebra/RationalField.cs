@@ -28,4 +28,8 @@ public readonly struct RationalField : IField<Rational>
     /// <inheritdoc/>
     public bool TryParse(string text, out Rational value)
         => Rational.TryParse(text, out value) && value.ToString() == text;
+
+    /// <inheritdoc/>
+    IEliminationResult<Rational> IField<Rational>.Eliminate(IReadOnlyList<SparseVector<Rational>> rows)
+        => MultiModularElimination.PaysOff(rows) ? MultiModularElimination.Run(rows) : new SparseElimination<Rational, RationalField>(this, rows);
 }

@@ -22,6 +22,12 @@ public static class DemoScenario
     /// <summary>The flow kinds each design is analysed for, generalized first.</summary>
     public static readonly FlowKind[] Kinds = [FlowKind.General, FlowKind.Causal];
 
+    /// <summary>
+    /// The design the demo surveys over every prime at once (`flowcert primes`): the lab's qutrit patch, asking
+    /// which qudit dimensions run it deterministically and how deep.
+    /// </summary>
+    public const string PrimeSurveyDesign = "qutrit-patch";
+
     /// <summary>The demo designs, each with the fields it is analysed over (Q, F_2, F_3, F_5).</summary>
     public static IReadOnlyList<DemoDesign> Designs()
     {

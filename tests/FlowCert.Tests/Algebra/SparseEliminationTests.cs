@@ -7,8 +7,8 @@ namespace FlowCert.Tests.Algebra;
 /// the dense elimination (itself checked against a reference rank in DenseMatrixTests): rank, left
 /// kernel, and SolveUnitVectors, which must return exactly the rows r with e_r in the column space, each
 /// with a solution that multiplies back to e_r, lives on the pivot columns (the greedy column basis), and
-/// does not depend on the order of the rows. The packed F_2 form (<see cref="BitElimination"/>) must
-/// pass the same checks.
+/// does not depend on the order of the rows. The dense kernels pass the same checks through the
+/// dispatcher here, and against the reference one by one in DenseKernelTests.
 /// </summary>
 public class SparseEliminationTests
 {
@@ -147,11 +147,22 @@ public class SparseEliminationTests
 
     [Fact]
     public void OverF2PackedIntoBits() => Check<ulong, PrimeField>(new PrimeField(2), 2, _ => 1UL, 25, 400,
-        rows => new BitElimination(rows.Select(r => r.Indices).ToList()));
+        rows => BitElimination.Run(rows));
 
     [Fact]
-    public void OverF2ThroughTheDispatcher() => Check<ulong, PrimeField>(new PrimeField(2), 2, _ => 1UL, 26, 400,
-        rows => Elimination.Run(new PrimeField(2), rows));
+    public void OverF2ThroughTheDispatcher() => Check<ulong, BinaryField>(default, 2, _ => 1UL, 26, 400,
+        rows => Elimination.Run(default(BinaryField), rows));
+
+    [Fact]
+    public void OverF3ThroughTheDispatcher() => Check<ulong, PrimeField>(new PrimeField(3), 3, r => (ulong)r.Next(1, 3), 27, 400,
+        rows => Elimination.Run(new PrimeField(3), rows));
+
+    [Fact]
+    public void OverQThroughTheDispatcher() => Check<Rational, RationalField>(default, 0, r =>
+    {
+        var q = FieldSamples.SmallRational(r);
+        return q.IsZero ? Rational.One : q;
+    }, 28, 300, rows => Elimination.Run(default(RationalField), rows));
 
     [Fact]
     public void OverF3() => Check<ulong, PrimeField>(new PrimeField(3), 3, r => (ulong)r.Next(1, 3), 23, 400);

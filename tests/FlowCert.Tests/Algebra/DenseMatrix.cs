@@ -1,8 +1,11 @@
-namespace FlowCert.Algebra;
+using FlowCert.Algebra;
+
+namespace FlowCert.Tests.Algebra;
 
 /// <summary>
-/// A dense matrix over any field, with Gauss-Jordan elimination. <see cref="BitMatrix"/> offers the same
-/// operations under the same names over F_2 with bit-packed rows.
+/// The reference elimination of the tests: a dense matrix over any field with plain Gauss-Jordan
+/// elimination, one entry at a time (checked itself against an independent rank in DenseMatrixTests).
+/// The library's kernels (sparse, packed F_2, word-sized F_p, multi-modular Q) are checked against it.
 /// </summary>
 public sealed class DenseMatrix<T, TField> where T : struct where TField : struct, IField<T>
 {
@@ -93,7 +96,7 @@ public sealed class DenseMatrix<T, TField> where T : struct where TField : struc
             for (int j = 0; j < Columns; j++) aug.a[i, j] = a[i, j];
             aug.a[i, Columns + i] = f.One;
         }
-        var (r, pivots) = aug.RowReduce();
+        var (r, _) = aug.RowReduce();
         var basis = new List<T[]>();
         for (int i = 0; i < Rows; i++)
         {
@@ -104,7 +107,6 @@ public sealed class DenseMatrix<T, TField> where T : struct where TField : struc
             for (int k = 0; k < Rows; k++) y[k] = r.a[i, Columns + k];
             basis.Add(y);
         }
-        _ = pivots;
         return basis;
     }
 
