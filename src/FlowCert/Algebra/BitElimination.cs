@@ -37,11 +37,11 @@ internal static class BitElimination
         var pivots = Rref(a, m, w);
         int k = 0;
         while (k < pivots.Length && pivots[k] < n) k++;
-        var top = new SparseVector<ulong>[k];
         var kernel = new SparseVector<ulong>[m - k];
         var pivotIds = new int[k];
+        for (int r = 0; r < k; r++) pivotIds[r] = ids[pivots[r]];
         var idx = new int[m];
-        for (int r = 0; r < m; r++)
+        for (int r = k; r < m; r++)
         {
             // The set bits of the I part, word by word.
             int count = 0;
@@ -60,11 +60,14 @@ internal static class BitElimination
             }
             var ones = new ulong[count];
             Array.Fill(ones, 1UL);
-            var v = new SparseVector<ulong>(idx.AsSpan(0, count).ToArray(), ones);
-            if (r < k) { top[r] = v; pivotIds[r] = ids[pivots[r]]; }
-            else kernel[r - k] = v;
+            kernel[r - k] = new SparseVector<ulong>(idx.AsSpan(0, count).ToArray(), ones);
         }
-        return new EchelonTransform<ulong>(m, pivotIds, top, kernel);
+        return new EchelonTransform<ulong>(m, pivotIds, (int row, int col, out ulong v) =>
+        {
+            int bit = n + col;
+            v = a[(long)row * s + (bit >> 6)] >> (bit & 63) & 1;
+            return v != 0;
+        }, kernel);
     }
 
     private static void Set(ulong[] a, long rowStart, int k) => a[rowStart + (k >> 6)] |= 1UL << (k & 63);
