@@ -62,11 +62,39 @@ internal static class BitElimination
             Array.Fill(ones, 1UL);
             kernel[r - k] = new SparseVector<ulong>(idx.AsSpan(0, count).ToArray(), ones);
         }
-        return new EchelonTransform<ulong>(m, pivotIds, (int row, int col, out ulong v) =>
+        // The I part of rows 0..k-1, transposed (bit a of row r set when entry (a, r) is one), so that the
+        // solution of row r is read off one packed row.
+        int ks = (k + 63) >> 6;
+        var transposed = new ulong[(long)m * ks];
+        for (int row = 0; row < k; row++)
         {
-            int bit = n + col;
-            v = a[(long)row * s + (bit >> 6)] >> (bit & 63) & 1;
-            return v != 0;
+            long start = (long)row * s;
+            for (int j = n; j < w;)
+            {
+                ulong word = a[start + (j >> 6)] >> (j & 63);
+                int limit = Math.Min(64 - (j & 63), w - j);
+                if (limit < 64) word &= (1UL << limit) - 1;
+                while (word != 0)
+                {
+                    int r = j + BitOperations.TrailingZeroCount(word) - n;
+                    transposed[(long)r * ks + (row >> 6)] |= 1UL << (row & 63);
+                    word &= word - 1;
+                }
+                j += limit;
+            }
+        }
+        return new EchelonTransform<ulong>(m, pivotIds, r =>
+        {
+            int count = 0;
+            for (int q = 0; q < ks; q++) count += BitOperations.PopCount(transposed[(long)r * ks + q]);
+            var cols = new int[count];
+            int t = 0;
+            for (int q = 0; q < ks; q++)
+                for (ulong word = transposed[(long)r * ks + q]; word != 0; word &= word - 1)
+                    cols[t++] = pivotIds[(q << 6) + BitOperations.TrailingZeroCount(word)];
+            var ones = new ulong[count];
+            Array.Fill(ones, 1UL);
+            return new SparseVector<ulong>(cols, ones);
         }, kernel);
     }
 
