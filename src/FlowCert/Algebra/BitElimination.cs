@@ -144,12 +144,7 @@ internal static class BitElimination
             {
                 int size = 1 << g;
                 var src = Row(a, first + g, s, from);
-                for (int t = 0; t < size; t++)
-                {
-                    var dst = table.AsSpan((size + t) * len, len);
-                    table.AsSpan(t * len, len).CopyTo(dst);
-                    Xor(dst, src);
-                }
+                for (int t = 0; t < size; t++) XorInto(table.AsSpan((size + t) * len, len), table.AsSpan(t * len, len), src);
             }
             // Every other row: its bits in the group's columns pick the combination that clears them.
             for (int i = 0; i < m; i++)
@@ -167,6 +162,22 @@ internal static class BitElimination
 
     private static Span<ulong> Row(ulong[] a, int i, int s, int fromWord)
         => a.AsSpan((int)((long)i * s + fromWord), s - fromWord);
+
+    /// <summary>target = x XOR y (target does not overlap x or y).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void XorInto(Span<ulong> target, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y)
+    {
+        int j = 0;
+        if (Vector256.IsHardwareAccelerated)
+        {
+            ref var t0 = ref MemoryMarshal.GetReference(target);
+            ref var x0 = ref MemoryMarshal.GetReference(x);
+            ref var y0 = ref MemoryMarshal.GetReference(y);
+            for (; j + 4 <= target.Length; j += 4)
+                (Vector256.LoadUnsafe(ref x0, (nuint)j) ^ Vector256.LoadUnsafe(ref y0, (nuint)j)).StoreUnsafe(ref t0, (nuint)j);
+        }
+        for (; j < target.Length; j++) target[j] = x[j] ^ y[j];
+    }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void Xor(Span<ulong> target, ReadOnlySpan<ulong> source)
