@@ -1,48 +1,66 @@
-using Newtonsoft.Json.Linq;
-
 namespace FlowCheck;
+
+/// <summary>The embedded graph, compact: node names sorted ordinally (a node is its rank in that order),
+/// roles, and edges as pairs of ranks with an index into the distinct weights.</summary>
+public sealed record Graph(string[] Names, Dictionary<string, int> Index, bool[] Input, bool[] Output)
+{
+    public List<(int U, int V, int W)> Edges { get; } = [];
+    public List<string> WeightText { get; } = [];
+    public List<Rational> Weights { get; } = [];
+
+    public string Sha256()
+    {
+        var touched = new bool[Names.Length];
+        foreach (var (u, v, _) in Edges) touched[u] = touched[v] = true;
+        IEnumerable<string> Where(Func<int, bool> keep) => Enumerable.Range(0, Names.Length).Where(keep).Select(i => Names[i]);
+        return CanonicalForm.Sha256(CanonicalForm.Lines(Where(i => Input[i]), Where(i => Output[i]), Where(i => !touched[i]),
+            Edges.Select(e => (Names[e.U], Names[e.V], WeightText[e.W]))));
+    }
+}
 
 /// <summary>Reads the certificate's "graph" object, requiring exactly the canonical shape of docs/formats.md.</summary>
 public static class EmbeddedGraph
 {
-    public static OpenGraph Read(JToken? token)
+    public static Graph Read(Json json)
     {
-        var g = Json.Object(token, "graph", "inputs", "outputs", "nodes", "edges");
-        var nodes = Names(g["nodes"], "graph.nodes");
-        var known = nodes.ToHashSet();
-        var inputs = Names(g["inputs"], "graph.inputs");
-        var outputs = Names(g["outputs"], "graph.outputs");
-        foreach (var n in inputs.Concat(outputs).Where(n => !known.Contains(n)))
-            throw new InvalidCertificate($"graph: input/output {n} is not in graph.nodes");
-        var edges = new List<Edge>();
-        var list = Json.Array(g["edges"], "graph.edges");
-        for (var i = 0; i < list.Count; i++)
+        json.Known("graph", "graph", "inputs", "outputs", "nodes", "edges");
+        var nodes = Names(json, "nodes");
+        var index = new Dictionary<string, int>(nodes.Count, StringComparer.Ordinal);
+        for (var i = 0; i < nodes.Count; i++) index[nodes[i]] = i;
+        var g = new Graph([.. nodes], index, new bool[nodes.Count], new bool[nodes.Count]);
+        foreach (var (key, role) in new[] { ("inputs", g.Input), ("outputs", g.Output) })
+            foreach (var n in Names(json, key))
+                role[index.TryGetValue(n, out var i) ? i : throw new InvalidCertificate($"graph: input/output {Json.Cut(n)} is not in graph.nodes")] = true;
+        var weights = new Dictionary<string, int>(StringComparer.Ordinal);
+        foreach (var i in json.At("graph", "edges", "graph.edges").Items("graph.edges"))
         {
-            var e = Json.Strings(list[i], $"graph.edges[{i}]");
+            var e = json.Strings("graph.edges", i);
             if (e.Count != 3) throw new InvalidCertificate($"graph.edges[{i}] must be [u, v, weight], found {e.Count} items");
-            var (u, v) = (e[0], e[1]);
-            if (!known.Contains(u) || !known.Contains(v)) throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} names a node not in graph.nodes");
-            if (string.CompareOrdinal(u, v) >= 0) throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} must have u < v");
-            if (Rational.ParseCanonical(e[2]) is not { } w || w.Num.IsZero)
-                throw new InvalidCertificate($"graph.edges[{i}]: weight \"{e[2]}\" of {u} {v} is not a canonical non-zero rational");
-            if (i > 0 && Compare(edges[^1], u, v) >= 0)
-                throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} after {edges[^1].U} {edges[^1].V} (must be sorted, no duplicates)");
-            edges.Add(new Edge(u, v, w));
+            var (u, v) = (Json.Cut(e[0]), Json.Cut(e[1]));
+            if (!index.TryGetValue(e[0], out var a) || !index.TryGetValue(e[1], out var b))
+                throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} names a node not in graph.nodes");
+            if (a >= b) throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} must have u < v");
+            if (!weights.TryGetValue(e[2], out var w))
+            {
+                if (Rational.ParseCanonical(e[2]) is not { } r || r.Num.IsZero)
+                    throw new InvalidCertificate($"graph.edges[{i}]: weight \"{Json.Cut(e[2])}\" of {u} {v} is not a canonical non-zero rational");
+                weights[e[2]] = w = g.Weights.Count;
+                g.Weights.Add(r);
+                g.WeightText.Add(e[2]);
+            }
+            if (i > 0 && (g.Edges[^1].U, g.Edges[^1].V).CompareTo((a, b)) >= 0)
+                throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} after {g.Names[g.Edges[^1].U]} {g.Names[g.Edges[^1].V]} (must be sorted, no duplicates)");
+            g.Edges.Add((a, b, w));
         }
-        return new OpenGraph(inputs, outputs, nodes, edges);
+        return g;
     }
 
-    static int Compare(Edge before, string u, string v)
+    static List<string> Names(Json json, string key)
     {
-        var byU = string.CompareOrdinal(before.U, u);
-        return byU != 0 ? byU : string.CompareOrdinal(before.V, v);
-    }
-
-    static List<string> Names(JToken? token, string what)
-    {
-        var names = Json.Strings(token, what);
+        var what = "graph." + key;
+        var names = json.At("graph", key, what).Strings(what);
         foreach (var n in names.Where(n => !OpenGraph.IsName(n)))
-            throw new InvalidCertificate($"{what}: \"{n}\" is not a valid node name");
+            throw new InvalidCertificate($"{what}: \"{Json.Cut(n)}\" is not a valid node name");
         Json.SortedUnique(names, what);
         return names;
     }

@@ -18,9 +18,9 @@ public sealed class Field
     {
         if (text == "Q") return new Field(text, 0);
         var m = PrimeField.Match(text);
-        if (!m.Success) throw new InvalidCertificate($"unknown field \"{text}\" (expected \"Q\" or \"F\" and a prime)");
+        if (!m.Success) throw new InvalidCertificate($"unknown field \"{Json.Cut(text)}\" (expected \"Q\" or \"F\" and a prime)");
         var p = BigInteger.Parse(m.Groups[1].Value);
-        if (p >= Prime.Limit) throw new InvalidCertificate($"field {text}: p is beyond the deterministic primality test (< {Prime.Limit})");
+        if (p >= Prime.Limit) throw new InvalidCertificate($"field {Json.Cut(text)}: p is beyond the deterministic primality test (< {Prime.Limit})");
         if (!Prime.IsPrime(p)) throw new InvalidCertificate($"field {text}: {p} is not a prime");
         return new Field(text, p);
     }
@@ -38,12 +38,17 @@ public sealed class Field
     }
 
     /// <summary>Reads a canonical non-zero element: a reduced rational over Q, a residue 1..p-1 over F_p.</summary>
+    /// <remarks>The answers for up to 4096 distinct short texts are remembered (a certificate repeats few values).</remarks>
     public Rational? ParseNonZero(string text)
     {
-        if (Rational.ParseCanonical(text) is not { } r || r.Num.IsZero) return null;
-        if (P.IsZero) return r;
-        return r.Den.IsOne && r.Num.Sign > 0 && r.Num < P ? r : null;
+        if (seen.TryGetValue(text, out var known)) return known;
+        Rational? answer = Rational.ParseCanonical(text) is not { } r || r.Num.IsZero ? null
+            : P.IsZero || (r.Den.IsOne && r.Num.Sign > 0 && r.Num < P) ? r : null;
+        if (seen.Count < 4096 && text.Length <= 40) seen[text] = answer;
+        return answer;
     }
+
+    readonly Dictionary<string, Rational?> seen = new(StringComparer.Ordinal);
 
     Rational Residue(BigInteger x) => new(((x % P) + P) % P, 1);
 }

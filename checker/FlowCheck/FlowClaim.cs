@@ -1,83 +1,85 @@
-using Newtonsoft.Json.Linq;
-
 namespace FlowCheck;
 
 /// <summary>Checks a "flow" verdict: the rounds and, per measured node, its correction vector
-/// (flows.md section 3 for general flow, section 4 for causal flow).</summary>
-public sealed class FlowClaim(FieldGraph g, bool causal)
+/// (flows.md section 3 for general flow, section 4 for causal flow), one vector at a time as it is read.</summary>
+public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress)
 {
-    readonly Dictionary<string, int> round = [];
+    readonly int[] round = new int[g.Count];
+    readonly Dictionary<int, Rational> product = [];
+    readonly List<(int U, Rational X)> c = [];
 
     /// <summary>Returns the depth proven, or throws naming the first failing node.</summary>
-    public int Check(JObject root)
+    public int Check(Json json)
     {
-        var rounds = Json.Array(root["rounds"], "rounds");
-        for (var i = 0; i < rounds.Count; i++) ReadRound(Json.Strings(rounds[i], $"rounds[{i}]"), i + 1);
-        var measured = g.Nodes.Where(g.IsMeasured).Order(StringComparer.Ordinal).ToList();
-        foreach (var v in measured.Where(v => !round.ContainsKey(v)))
-            throw new InvalidCertificate($"measured node {v} is in no round");
-        var depth = Json.Integer(root["depth"], "depth");
-        if (depth != rounds.Count) throw new InvalidCertificate($"depth is {depth} but there are {rounds.Count} rounds");
-        var corrections = Json.NodeMap(root["corrections"], "corrections");
-        foreach (var p in corrections.Properties().Where(p => !round.ContainsKey(p.Name)))
-            throw new InvalidCertificate($"corrections: {p.Name} is not a measured node");
-        foreach (var v in measured)
-            CheckCorrection(v, corrections[v] ?? throw new InvalidCertificate($"node {v}: no correction vector"));
-        return rounds.Count;
+        var rounds = 0;
+        foreach (var i in json.At("", "rounds", "rounds").Items("rounds")) ReadRound(json.Strings("rounds", i), ++rounds);
+        for (var v = 0; v < g.Count; v++)
+            if (!g.IsOutput(v) && round[v] == 0) throw new InvalidCertificate($"measured node {g.Name(v)} is in no round");
+        var depth = json.At("", "depth", "depth").Integer("depth");
+        if (depth != rounds) throw new InvalidCertificate($"depth is {Rational.Show(depth)} but there are {rounds} rounds");
+        var (next, missing) = (0, -1);
+        foreach (var key in json.At("", "corrections", "corrections").NodeMap("corrections"))
+        {
+            var v = g.Measured(key, "corrections");
+            (missing, next) = (missing < 0 ? Missing(next, v) : missing, v + 1);
+            CheckCorrection(v, json);
+            progress.Report("correction vectors checked", v, g.Count);
+        }
+        if ((missing < 0 ? Missing(next, g.Count) : missing) is >= 0 and var first) throw new InvalidCertificate($"node {g.Name(first)}: no correction vector");
+        return rounds;
     }
+
+    /// <summary>The first measured node in [from, to) (they have no vector), or -1; reported after the map is read.</summary>
+    int Missing(int from, int to) => Enumerable.Range(from, to - from).FirstOrDefault(v => !g.IsOutput(v), -1);
 
     void ReadRound(List<string> nodes, int r)
     {
         if (nodes.Count == 0) throw new InvalidCertificate($"round {r} is empty");
         Json.SortedUnique(nodes, $"round {r}");
-        foreach (var v in nodes)
+        foreach (var name in nodes)
         {
-            if (!g.IsMeasured(v)) throw new InvalidCertificate($"round {r}: {v} is not a measured node");
-            if (!round.TryAdd(v, r)) throw new InvalidCertificate($"node {v} is in round {round[v]} and in round {r}");
+            var v = g.Measured(name, $"round {r}");
+            if (round[v] != 0) throw new InvalidCertificate($"node {name} is in round {round[v]} and in round {r}");
+            round[v] = r;
         }
     }
 
     /// <summary>An output, or a measured node in a strictly later round.</summary>
-    bool IsLater(string u, string v) => g.Outputs.Contains(u) || round[u] > round[v];
+    bool IsLater(int u, int v) => g.IsOutput(u) || round[u] > round[v];
 
-    /// <summary>Where a node that is not later than another sits (never an output: outputs are always later).</summary>
-    string Position(string u) => $"in round {round[u]}";
-
-    void CheckCorrection(string v, JToken token)
+    void CheckCorrection(int v, Json json)
     {
-        var entries = Json.NodeMap(token, $"corrections.{v}");
-        var c = new Dictionary<string, Rational>();
-        foreach (var p in entries.Properties())
+        var name = g.Name(v);
+        c.Clear();
+        foreach (var key in json.NodeMap("corrections", name))
         {
-            var u = p.Name;
-            var text = Json.String(p.Value, $"corrections.{v}.{u}");
-            if (!g.Nodes.Contains(u)) throw new InvalidCertificate($"node {v}: correction on unknown node {u}");
-            c[u] = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate(
-                $"node {v}: c_{v}({u}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
-            if (g.Inputs.Contains(u)) throw new InvalidCertificate($"node {v}: correction on input {u}");
-            if (!IsLater(u, v)) throw new InvalidCertificate($"node {v} (round {round[v]}): correction on {u} ({Position(u)}), which is not later");
+            var text = json.String($"corrections.{name}", key);
+            if (!g.Graph.Index.TryGetValue(key, out var u)) throw new InvalidCertificate($"node {name}: correction on unknown node {Json.Cut(key)}");
+            var x = g.Field.ParseNonZero(text) ?? throw new InvalidCertificate($"node {name}: c_{name}({key}) = \"{Json.Cut(text)}\" is not a canonical non-zero element of {g.Field.Name}");
+            if (g.IsInput(u)) throw new InvalidCertificate($"node {name}: correction on input {key}");
+            if (!IsLater(u, v)) throw new InvalidCertificate($"node {name} (round {round[v]}): correction on {key} (in round {round[u]}), which is not later");
+            c.Add((u, x));
         }
-        if (causal) CheckCausal(v, c);
-        var product = new Dictionary<string, Rational>();
+        if (causal) CheckCausal(v, name);
         foreach (var (u, x) in c)
-            foreach (var (w, a) in g.Adjacent[u])
-                product[w] = g.Field.Add(product.GetValueOrDefault(w, Rational.Zero), g.Field.Mul(a, x));
+            foreach (var (w, a) in g.Neighbours(u))
+                g.Add(product, w, g.Field.Mul(a, x));
         var self = product.GetValueOrDefault(v, Rational.Zero);
-        if (self != Rational.One) throw new InvalidCertificate($"node {v}: (A c_{v})({v}) = {self}, not 1");
-        foreach (var w in product.Keys.Order(StringComparer.Ordinal))
+        if (self != Rational.One) throw new InvalidCertificate($"node {name}: (A c_{name})({name}) = {self.Show()}, not 1");
+        foreach (var w in product.Keys.Order())
             if (w != v && !product[w].Num.IsZero && !IsLater(w, v))
-                throw new InvalidCertificate(
-                    $"node {v} (round {round[v]}): (A c_{v})({w}) = {product[w]} is non-zero but {w} is {Position(w)}, not later");
+                throw new InvalidCertificate($"node {name} (round {round[v]}): (A c_{name})({g.Name(w)}) = {product[w].Show()} is non-zero but {g.Name(w)} is in round {round[w]}, not later");
+        product.Clear();
     }
 
     /// <summary>Section 4: one entry, on a neighbour f(v), equal to 1 / A[v][f(v)].</summary>
-    void CheckCausal(string v, Dictionary<string, Rational> c)
+    void CheckCausal(int v, string name)
     {
-        if (c.Count != 1) throw new InvalidCertificate($"node {v}: a causal correction has exactly one entry, found {c.Count}");
-        var (f, x) = c.Single();
-        if (!g.Adjacent[v].TryGetValue(f, out var a))
-            throw new InvalidCertificate($"node {v}: f({v}) = {f} is not a neighbour of {v} in {g.Field.Name}");
+        if (c.Count != 1) throw new InvalidCertificate($"node {name}: a causal correction has exactly one entry, found {c.Count}");
+        var (f, x) = c[0];
+        if (g.Neighbours(v).Where(e => e.Node == f).Select(e => (Rational?)e.A).FirstOrDefault() is not { } a)
+            throw new InvalidCertificate($"node {name}: f({name}) = {g.Name(f)} is not a neighbour of {name} in {g.Field.Name}");
         var inverse = g.Field.Inverse(a);
-        if (x != inverse) throw new InvalidCertificate($"node {v}: c_{v}({f}) = {x} but 1/A[{v}][{f}] = {inverse}");
+        if (x != inverse) throw new InvalidCertificate($"node {name}: c_{name}({g.Name(f)}) = {x.Show()} but 1/A[{name}][{g.Name(f)}] = {inverse.Show()}");
     }
 }

@@ -1,70 +1,280 @@
+using System.Buffers;
 using System.Numerics;
-using Newtonsoft.Json;
-using Newtonsoft.Json.Linq;
+using System.Text;
 
 namespace FlowCheck;
 
-/// <summary>Loads the certificate text and reads JSON values of exactly the expected shape.</summary>
-public static class Json
+/// <summary>A strict RFC 8259 JSON reader over a file read in 64 KiB chunks, never the whole text at once.
+/// <see cref="Validate"/> reads the document once (syntax, UTF-8, duplicate keys, nothing after the value)
+/// and remembers where the members of the top object (and of its "graph", "producer" and "obstruction"
+/// objects) start; the typed readers then seek there and read values of exactly the expected shape.</summary>
+public sealed class Json : IDisposable
 {
-    /// <summary>Parses one JSON document: no duplicate keys, no trailing content, numbers exact.</summary>
-    public static JToken Load(string path)
+    static readonly UTF8Encoding Utf8 = new(false, true);
+    static readonly string[] Nested = ["graph", "producer", "obstruction"];
+    static readonly SearchValues<byte> Special = SearchValues.Create([(byte)'"', (byte)'\\', .. Enumerable.Range(0, 32).Select(b => (byte)b)]);
+    readonly List<HashSet<string>> keySets = [];
+    readonly Stream stream;
+    readonly string path;
+    readonly Progress progress;
+    readonly byte[] buffer = new byte[1 << 16];
+    byte[] bytes = new byte[256];
+    int length, pos, line = 1, column = 1;
+
+    /// <summary>Where each remembered member value starts, by container ("" for the top object, or "graph",
+    /// "producer", "obstruction") and key.</summary>
+    readonly Dictionary<(string, string), (long Offset, int Line, int Column)> members = [];
+
+    public Json(string path, Progress progress)
     {
-        string text;
-        try { text = File.ReadAllText(path); }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        { throw new UnreadableInput($"{path}: {e.Message}"); }
-        try
+        (this.path, this.progress) = (path, progress);
+        try { stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan); }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException) { throw new UnreadableInput($"{path}: {e.Message}"); }
+        if (!stream.CanSeek) { var copy = new MemoryStream(); stream.CopyTo(copy); stream.Dispose(); stream = copy; }
+    }
+
+    public void Dispose() => stream.Dispose();
+
+    /// <summary>Reads the whole document once; throws <see cref="UnreadableInput"/> at the first fault, with line and column.</summary>
+    public void Validate()
+    {
+        Seek((0, 1, 1));
+        Skip(0, "");
+        if (Kind(end: true) != "end") throw Syntax("content after the JSON value");
+    }
+
+    void Skip(int depth, string at)
+    {
+        if (depth > 64) throw Syntax("nesting deeper than 64 levels");
+        switch (Kind())
         {
-            using var reader = new JsonTextReader(new StringReader(text))
-            { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
-            var settings = new JsonLoadSettings { DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error };
-            var token = JToken.ReadFrom(reader, settings);
-            if (reader.Read()) throw new UnreadableInput($"{path}: content after the JSON value");
-            return token;
+            case "object":
+                while (keySets.Count <= depth) keySets.Add(new(StringComparer.Ordinal));
+                var keys = keySets[depth];
+                keys.Clear();
+                foreach (var key in Object())
+                {
+                    if (!keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
+                    if (depth == 0 || (depth == 1 && Nested.Contains(at))) members[(at, key)] = (Position, line, column);
+                    Skip(depth + 1, depth == 0 ? key : "-");
+                }
+                break;
+            case "array": foreach (var _ in Array()) Skip(depth + 1, "-"); break;
+            case "string": ReadString(keep: false); break;
+            case "number": Number(); break;
+            default: foreach (var c in Kind()) if (Peek() == c) Take(); else throw Syntax("misspelt literal (true, false or null)"); break;
         }
-        catch (JsonReaderException e) { throw new UnreadableInput($"{path}: not JSON: {e.Message}"); }
     }
 
-    /// <summary>An object whose keys are all among <paramref name="known"/>.</summary>
-    public static JObject Object(JToken? token, string what, params string[] known)
+    long Position => stream.Position - length + pos;
+
+    bool Seek((long Offset, int Line, int Column) at)
     {
-        if (token is not JObject o) throw Shape(token, what, "an object");
-        foreach (var p in o.Properties())
-            if (!known.Contains(p.Name)) throw new InvalidCertificate($"unknown key \"{p.Name}\" in {what}");
-        return o;
+        (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column);
+        return true;
     }
 
-    /// <summary>An object keyed by node names, keys sorted ordinally and unique.</summary>
-    public static JObject NodeMap(JToken? token, string what)
+    int Peek()
     {
-        if (token is not JObject o) throw Shape(token, what, "an object");
-        SortedUnique(o.Properties().Select(p => p.Name).ToList(), what);
-        return o;
+        if (pos < length) return buffer[pos];
+        (length, pos) = (stream.Read(buffer), 0);
+        progress.Report("bytes read", stream.Position, stream.Length);
+        return length > 0 ? buffer[0] : -1;
     }
 
-    public static JArray Array(JToken? token, string what) => token as JArray ?? throw Shape(token, what, "an array");
+    int Take()
+    {
+        var b = Peek() is >= 0 and var next ? next : throw Syntax("unexpected end of the text");
+        (pos, line, column) = (pos + 1, b == '\n' ? line + 1 : line, b == '\n' ? 1 : (b & 0xC0) != 0x80 ? column + 1 : column);
+        return b;
+    }
 
-    public static string String(JToken? token, string what) =>
-        token?.Type == JTokenType.String ? (string)token! : throw Shape(token, what, "a string");
+    /// <summary>Skips white space; returns the next byte (-1 at the end).</summary>
+    int Space()
+    {
+        int b;
+        for (; (b = Peek()) is ' ' or '\t' or '\n' or '\r'; pos++) (line, column) = b == '\n' ? (line + 1, 1) : (line, column + 1);
+        return b;
+    }
 
-    /// <summary>At most 80 characters of a value from the input, then "...": a message never repeats a long value whole.</summary>
-    public static string Cut(string s) => s.Length <= 80 ? s : s[..80] + "...";
+    UnreadableInput Syntax(string what) => new($"{path}:{line}:{column}: not JSON: {what}");
 
-    public static List<string> Strings(JToken? token, string what) =>
-        Array(token, what).Select((t, i) => String(t, $"{what}[{i}]")).ToList();
+    /// <summary>Skips white space and names the next value's kind ("true", "false", "null" for literals; "number";
+    /// "end" at the end of the text if <paramref name="end"/> allows it).</summary>
+    string Kind(bool end = false) =>
+        Space() switch
+        {
+            '{' => "object", '[' => "array", '"' => "string", 't' => "true", 'f' => "false", 'n' => "null",
+            '-' or (>= '0' and <= '9') => "number", < 0 when end => "end", < 0 => throw Syntax("unexpected end of the text"),
+            var b => throw Syntax(end ? "content after the JSON value" : b == 0 ? "NUL byte" : b < 0x80 ? $"unexpected character '{(char)b}'" : "unexpected byte"),
+        };
 
-    public static BigInteger Integer(JToken? token, string what) =>
-        token?.Type == JTokenType.Integer ? BigInteger.Parse(token.ToString()) : throw Shape(token, what, "an integer");
+    void Expect(char c) { if (Space() == c) Take(); else throw Syntax($"expected '{c}'"); }
+
+    /// <summary>The members of an object: yields each key; the caller reads or skips its value before the next.</summary>
+    IEnumerable<string> Object()
+    {
+        Expect('{');
+        if (Space() == '}' && Take() > 0) yield break;
+        do
+        {
+            if (Space() != '"') throw Syntax("expected a key in double quotes");
+            var key = ReadString()!;
+            Expect(':');
+            yield return key;
+        } while (Next('}'));
+    }
+
+    IEnumerable<int> Array()
+    {
+        Expect('[');
+        if (Space() == ']' && Take() > 0) yield break;
+        var i = 0;
+        do yield return i++; while (Next(']'));
+    }
+
+    /// <summary>After a member or item: a comma (then another must follow) or the closing bracket.</summary>
+    bool Next(char close)
+    {
+        var b = Space() is var next && (next == ',' || next == close) ? Take() : throw Syntax($"expected ',' or '{close}'");
+        return b == ',';
+    }
+
+    /// <summary>A string; the usual case, a string without escapes inside the buffer, is decoded in place.
+    /// Without <paramref name="keep"/> it is only validated (null is returned).</summary>
+    string? ReadString(bool keep = true)
+    {
+        Take();
+        var rest = buffer.AsSpan(pos, length - pos);
+        var end = rest.IndexOfAny(Special);
+        if (end >= 0 && rest[end] == '"')
+        {
+            var text = rest[..end];
+            if (!System.Text.Unicode.Utf8.IsValid(text)) throw Syntax("a string that is not UTF-8");
+            (pos, column) = (pos + end + 1, column + 1 + (System.Text.Ascii.IsValid(text) ? end : Utf8.GetCharCount(text)));
+            return keep ? Utf8.GetString(text) : null;
+        }
+        var n = 0;
+        for (var b = Peek(); b != '"'; b = Peek())
+        {
+            if (b is >= 0 and < 0x20) throw Syntax("control character in a string (write it as an escape)");
+            Take();
+            if (n + 4 > bytes.Length) System.Array.Resize(ref bytes, bytes.Length * 2);
+            if (b != '\\') { bytes[n++] = (byte)b; continue; }
+            var e = Peek();
+            int c = e switch { '"' => '"', '\\' => '\\', '/' => '/', 'b' => '\b', 'f' => '\f', 'n' => '\n', 'r' => '\r', 't' => '\t', 'u' => 0, _ => -1 };
+            if (c < 0) throw Syntax("unknown escape");
+            Take();
+            if (e == 'u') c = Hex4();
+            if (c is >= 0xDC00 and < 0xE000) throw Syntax("lone low surrogate");
+            if (c is >= 0xD800 and < 0xDC00)
+            {
+                var low = Take() == '\\' && Take() == 'u' ? Hex4() : -1;
+                if (low is < 0xDC00 or >= 0xE000) throw Syntax("lone high surrogate");
+                c = 0x10000 + ((c - 0xD800) << 10) + (low - 0xDC00);
+            }
+            n += new Rune(c).EncodeToUtf8(bytes.AsSpan(n));
+        }
+        Take();
+        try { return Utf8.GetString(bytes, 0, n); }
+        catch (DecoderFallbackException) { throw Syntax("a string that is not UTF-8"); }
+    }
+
+    int Hex4()
+    {
+        var v = 0;
+        for (var i = 0; i < 4; i++)
+            v = v * 16 + (Take() switch { var b and >= '0' and <= '9' => b - '0', var b and >= 'a' and <= 'f' => b - 'a' + 10,
+                var b and >= 'A' and <= 'F' => b - 'A' + 10, _ => throw Syntax("\\u needs four hex digits") });
+        return v;
+    }
+
+    /// <summary>A number: -?(0|[1-9][0-9]*)(.[0-9]+)?([eE][+-]?[0-9]+)?; returns its text and whether it is an integer.</summary>
+    (string Text, bool Integer) Number()
+    {
+        var text = new StringBuilder();
+        void Digits() { if (Peek() is < '0' or > '9') throw Syntax("a digit must follow"); while (Peek() is >= '0' and <= '9') text.Append((char)Take()); }
+        if (Peek() == '-') text.Append((char)Take());
+        if (Peek() == '0') text.Append((char)Take());
+        else Digits();
+        var integer = true;
+        if (Peek() == '.') { text.Append((char)Take()); Digits(); integer = false; }
+        if (Peek() is not ('e' or 'E')) return (text.ToString(), integer);
+        text.Append((char)Take());
+        if (Peek() is '+' or '-') text.Append((char)Take());
+        Digits();
+        return (text.ToString(), false);
+    }
+
+    // ---- typed reading, after Validate: a wrong shape is a verdict (InvalidCertificate), not a syntax error ----
+
+    /// <summary>Moves to a member's value (container "" is the top object); false when the member is absent.</summary>
+    public bool Find(string container, string key) => members.TryGetValue((container, key), out var at) && Seek(at);
+
+    /// <summary>Moves to a member that must be present.</summary>
+    public Json At(string container, string key, string what) =>
+        Find(container, key) ? this : throw new InvalidCertificate($"missing {what}");
+
+    /// <summary>Requires the top object (container "") or a remembered member object whose keys are all known.</summary>
+    public void Known(string container, string what, params string[] known)
+    {
+        if (container == "") Seek((0, 1, 1));
+        else At("", container, what);
+        Expecting("object", what, "an object");
+        foreach (var (_, key) in members.Keys.Where(m => m.Item1 == container && !known.Contains(m.Item2)))
+            throw new InvalidCertificate($"unknown key \"{Cut(key)}\" in {what}");
+    }
+
+    /// <summary>Requires the next value's kind; the message names <paramref name="what"/> with ".key" or "[index]" if given
+    /// (composed only for the message: most values are read without one).</summary>
+    void Expecting(string kind, string what, string expected, string? key = null, int index = -1)
+    {
+        var found = Kind();
+        if (found == kind) return;
+        if (key is not null) what = $"{what}.{Cut(key)}";
+        if (index >= 0) what = $"{what}[{index}]";
+        if (found == "number") found = Number().Integer ? "integer" : "float";
+        if (found is "true" or "false") found = "boolean";
+        throw new InvalidCertificate($"{what} must be {expected}, found {found}");
+    }
+
+    public string String(string what, string? key = null, int index = -1) { Expecting("string", what, "a string", key, index); return ReadString()!; }
+
+    public BigInteger Integer(string what)
+    {
+        Expecting("number", what, "an integer");
+        return Number() is (var text, true) ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float");
+    }
+
+    /// <summary>Items of an array; the caller reads each item before asking for the next.</summary>
+    public IEnumerable<int> Items(string what, int index = -1) { Expecting("array", what, "an array", null, index); return Array(); }
+
+    /// <summary>An array of strings; <paramref name="index"/>, when given, says the array is item [index] of <paramref name="what"/>.</summary>
+    public List<string> Strings(string what, int index = -1) =>
+        Items(what, index).Select(i => Kind() == "string" ? ReadString()! : String(index < 0 ? what : $"{what}[{index}]", null, i)).ToList();
+
+    /// <summary>Keys of an object keyed by node names, required strictly increasing (sorted, no duplicates).</summary>
+    public IEnumerable<string> NodeMap(string what, string? owner = null)
+    {
+        Expecting("object", what, "an object", owner);
+        if (owner is not null) what = $"{what}.{owner}";
+        string? before = null;
+        foreach (var key in Object())
+        {
+            if (before is not null && string.CompareOrdinal(before, key) >= 0) throw Unsorted(what, key, before);
+            yield return before = key;
+        }
+    }
 
     /// <summary>Requires strictly increasing ordinal order: sorted and free of duplicates.</summary>
     public static void SortedUnique(List<string> names, string what)
     {
-        for (var i = 1; i < names.Count; i++)
-            if (string.CompareOrdinal(names[i - 1], names[i]) >= 0)
-                throw new InvalidCertificate($"{what}: \"{names[i]}\" after \"{names[i - 1]}\" (must be sorted, no duplicates)");
+        for (var i = 1; i < names.Count; i++) if (string.CompareOrdinal(names[i - 1], names[i]) >= 0) throw Unsorted(what, names[i], names[i - 1]);
     }
 
-    static InvalidCertificate Shape(JToken? token, string what, string expected) =>
-        new(token is null ? $"missing {what}" : $"{what} must be {expected}, found {token.Type.ToString().ToLowerInvariant()}");
+    static InvalidCertificate Unsorted(string what, string name, string before) =>
+        new($"{what}: \"{Cut(name)}\" after \"{Cut(before)}\" (must be sorted, no duplicates)");
+
+    /// <summary>At most 80 characters of a value from the input, then "...": a message never repeats a long value whole.</summary>
+    public static string Cut(string s) => s.Length <= 80 ? s : s[..80] + "...";
 }

@@ -1,35 +1,48 @@
+using System.Diagnostics;
+
 namespace FlowCheck;
 
-/// <summary>The command line: flowcheck CERT [--graph GRAPH]. Exit 0 valid, 1 invalid, 2 unreadable input.</summary>
+/// <summary>The command line: flowcheck CERT [--graph GRAPH] [--quiet]. Exit 0 valid, 1 invalid, 2 unreadable input.</summary>
 public static class Program
 {
-    public const string Usage = "usage: flowcheck CERT [--graph GRAPH]";
+    public const string Usage = "usage: flowcheck CERT [--graph GRAPH] [--quiet] | --help | --version";
 
-    public static int Main(string[] args) => Run(args, Console.Out, Console.Error);
+    public static int Main(string[] args) => Run(args, Console.Out, Console.Error, !Console.IsErrorRedirected);
 
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    /// <summary>Runs the checker; <paramref name="terminal"/> (standard error is a terminal) allows progress lines.</summary>
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool terminal = false)
     {
-        if (Arguments(args) is not var (certPath, graphPath))
+        if (args is ["--help" or "-h"])
+        {
+            stdout.WriteLine(Usage);
+            stdout.WriteLine("Checks a flowcert certificate: exit 0 valid, 1 invalid, 2 unreadable input.");
+            stdout.WriteLine("--graph GRAPH: the certificate must be about exactly this .ograph file.");
+            stdout.WriteLine("--quiet: no progress lines on a terminal.");
+            return 0;
+        }
+        if (args is ["--version"])
+        {
+            stdout.WriteLine($"flowcheck {typeof(Program).Assembly.GetName().Version?.ToString(3)}");
+            return 0;
+        }
+        var quiet = args.Contains("--quiet");
+        if (Arguments(args.Where(a => a != "--quiet").ToArray()) is not var (certPath, graphPath))
         {
             stderr.WriteLine(Usage);
             return 2;
         }
+        var progress = new Progress(terminal && !quiet ? stderr : null);
         try
         {
             var fileGraph = graphPath is null ? null : OgraphReader.Read(graphPath);
-            foreach (var line in Certificate.Check(Json.Load(certPath), fileGraph, graphPath)) stdout.WriteLine(line);
+            using var json = new Json(certPath, progress);
+            var lines = Certificate.Check(json, fileGraph, graphPath, progress);
+            progress.Done();
+            foreach (var line in lines) stdout.WriteLine(line);
             return 0;
         }
-        catch (InvalidCertificate e)
-        {
-            stdout.WriteLine($"invalid: {OneLine(e.Message)}");
-            return 1;
-        }
-        catch (UnreadableInput e)
-        {
-            stderr.WriteLine($"unreadable: {OneLine(e.Message)}");
-            return 2;
-        }
+        catch (InvalidCertificate e) { progress.Done(); stdout.WriteLine($"invalid: {OneLine(e.Message)}"); return 1; }
+        catch (UnreadableInput e) { progress.Done(); stderr.WriteLine($"unreadable: {OneLine(e.Message)}"); return 2; }
     }
 
     /// <summary>Control characters from the input (a newline in a name, say) are shown as \uXXXX escapes.</summary>
@@ -47,5 +60,27 @@ public static class Program
             else return null;
         }
         return cert is null ? null : (cert, graph);
+    }
+}
+
+/// <summary>One progress line on a terminal's standard error, shown once a run has taken a second, redrawn at
+/// most five times a second and erased at the end; silent when <paramref name="terminal"/> is null.</summary>
+public sealed class Progress(TextWriter? terminal)
+{
+    readonly Stopwatch clock = Stopwatch.StartNew();
+    long shown = -1;
+
+    public void Report(string what, long done, long total)
+    {
+        var now = clock.ElapsedMilliseconds;
+        if (terminal is null || now < 1000 || now - shown < 200) return;
+        shown = now;
+        terminal.Write($"\rflowcheck: {what}: {done:N0} of {total:N0}, {now / 1000.0:F1} s elapsed   ");
+    }
+
+    public void Done()
+    {
+        if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r");
+        shown = -1;
     }
 }

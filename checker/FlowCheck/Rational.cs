@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Numerics;
 using System.Text.RegularExpressions;
 
@@ -28,6 +29,11 @@ public readonly record struct Rational
     /// <summary>The canonical text: "a" when the denominator is 1, else "a/b".</summary>
     public override string ToString() => Den.IsOne ? Num.ToString() : $"{Num}/{Den}";
 
+    /// <summary>The value for a message: at most 80 characters, and a long number by its size only (printing it is quadratic).</summary>
+    public string Show() => Num.GetBitLength() + Den.GetBitLength() < 3000 ? Json.Cut(ToString()) : $"({Show(Num)})/({Show(Den)})";
+
+    public static string Show(BigInteger n) => n.GetBitLength() < 3000 ? Json.Cut(n.ToString()) : $"a number of {n.GetBitLength()} bits";
+
     /// <summary>Reads a weight of the graph file grammar: "-3", "1/2", "0.25"; null when malformed.</summary>
     public static Rational? ParseWeight(string text)
     {
@@ -49,6 +55,7 @@ public readonly record struct Rational
     /// <remarks>Checked by shape and by the reduced denominator, not by printing (printing a long number is quadratic).</remarks>
     public static Rational? ParseCanonical(string text)
     {
+        if (text.Length is > 0 and < 19 && long.TryParse(text, CultureInfo.InvariantCulture, out var small) && small.ToString(CultureInfo.InvariantCulture) == text) return new Rational(small, 1);
         if (!CanonicalShape.IsMatch(text) || ParseWeight(text) is not { } r) return null;
         var slash = text.IndexOf('/');
         if (slash < 0) return r;

@@ -20,9 +20,26 @@ public sealed class UserInputException(string message) : Exception(message);
 /// <summary>The <c>flowcert</c> command: parses arguments, runs one subcommand, maps errors to exit codes.</summary>
 public static class CliApp
 {
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, TextReader? stdin = null)
     {
-        var root = new RootCommand("flowcert: exact flows for measurement-based quantum computing on weighted graph states");
+        Terminal.In = stdin ?? Console.In;
+        Terminal.Error = stderr;
+        // A plain command named flowcert (a RootCommand takes the name of the running assembly, FlowCert.Cli)
+        var root = new Command("flowcert", "flowcert: exact flows for measurement-based quantum computing on weighted graph states");
+        var version = new Option<bool>("--version") { Description = "Show the version" };
+        root.Options.Add(new System.CommandLine.Help.HelpOption());
+        root.Options.Add(version);
+        root.SetAction(p =>
+        {
+            if (!p.GetValue(version))
+            {
+                stderr.WriteLine("flowcert: give a command (solve, demo, schedule, simulate, generate, convert, draw).");
+                stderr.WriteLine("Run 'flowcert --help' for usage.");
+                return ExitCode.BadInput;
+            }
+            stdout.WriteLine($"flowcert {CertificateWriter.ProducerVersion}");
+            return ExitCode.Flow;
+        });
         root.Subcommands.Add(SolveCommand.Create(stdout));
         root.Subcommands.Add(DemoCommand.Create(stdout));
         root.Subcommands.Add(ScheduleCommand.Create(stdout));
@@ -30,10 +47,13 @@ public static class CliApp
         root.Subcommands.Add(GenerateCommand.Create(stdout));
         root.Subcommands.Add(ConvertCommand.Create(stdout));
         root.Subcommands.Add(DrawCommand.Create(stdout));
+        root.Subcommands.Add(CircuitCommand.Create(stdout));
+        root.Subcommands.Add(PrimesCommand.Create(stdout));
+        root.Subcommands.Add(NoiseCommand.Create(stdout));
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {
-            foreach (var e in parsed.Errors) stderr.WriteLine($"flowcert: {e.Message}");
+            foreach (var e in parsed.Errors) stderr.WriteLine($"flowcert: {Escaped.Of(e.Message)}");
             stderr.WriteLine("Run 'flowcert --help' for usage.");
             return ExitCode.BadInput;
         }
@@ -45,12 +65,12 @@ public static class CliApp
         catch (Exception e) when (e is GraphFormatException or FieldSpecException or WeightNotInFieldException or UserInputException
             or GraphFileException or FamilyParameterException or CertificateFormatException)
         {
-            stderr.WriteLine($"flowcert: {e.Message}");
+            stderr.WriteLine($"flowcert: {Escaped.Of(e.Message)}");
             return ExitCode.BadInput;
         }
         catch (Exception e) when (e is FileNotFoundException or DirectoryNotFoundException or UnauthorizedAccessException or IOException)
         {
-            stderr.WriteLine($"flowcert: {e.Message}");
+            stderr.WriteLine($"flowcert: {Escaped.Of(e.Message)}");
             return ExitCode.BadInput;
         }
         catch (Exception e)

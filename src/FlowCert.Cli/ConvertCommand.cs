@@ -28,11 +28,11 @@ public static class ConvertCommand
     public static int Execute(string inPath, string outPath, string? inputs, string? outputs, TextWriter stdout)
     {
         var format = GraphFiles.FormatOf(outPath);
-        var g = GraphFiles.Read(inPath, inputs, outputs);
+        var g = GraphInput.Read(inPath, inputs, outputs);
         // The canonical form carries no position hints (docs/formats.md), so .ograph output is exactly it.
         var text = format == GraphFileFormat.Ograph ? Graphs.CanonicalForm.Write(g) : GraphFiles.Write(g, format);
         SafeFile.WriteAllText(outPath, text, inPath);
-        stdout.WriteLine($"wrote {outPath}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + TerminalsNote(g, format));
+        stdout.WriteLine($"wrote {Escaped.Of(outPath)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + TerminalsNote(g, format));
         return ExitCode.Flow;
     }
 

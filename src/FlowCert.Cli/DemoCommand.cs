@@ -2,6 +2,8 @@ using System.CommandLine;
 using FlowCert.Certificates;
 using FlowCert.Demo;
 using FlowCert.Flows;
+using FlowCert.Flows.Primes;
+using FlowCert.Algebra.Factoring;
 
 namespace FlowCert.Cli;
 
@@ -47,7 +49,20 @@ public static class DemoCommand
             }
             o.WriteLine();
         }
-        o.WriteLine($"{written} certificates written to {outDir}/ ; check one with: dotnet run --project checker/FlowCheck -- {outDir}/splitter-pair.Q.general.json");
+        WritePrimeSurveyScene(outDir, o);
+        o.Write(NoiseScene.Text());
+        o.WriteLine();
+        o.WriteLine($"{written} certificates written to {Escaped.Of(outDir)}/ ; check one with: dotnet run --project checker/FlowCheck -- {Escaped.Of(outDir)}/splitter-pair.Q.general.json");
         return ExitCode.Flow;
+    }
+
+    // The scene "choosing a prime dimension": one design surveyed over every prime (flowcert primes; docs/primes.md).
+    private static void WritePrimeSurveyScene(string outDir, TextWriter o)
+    {
+        var design = DemoScenario.Designs().Single(d => d.Name == DemoScenario.PrimeSurveyDesign);
+        o.WriteLine($"Choosing a prime dimension: the lab surveys {design.Name} over every prime at once (flowcert primes)");
+        var survey = PrimeSurvey.Run(design.Graph, FlowKind.General, new FactoringBudget(TimeSpan.FromSeconds(PrimesCommand.DefaultFactorSeconds)));
+        PrimesReport.WriteTable(o, Path.Combine(outDir, design.Name + ".ograph"), survey, null, []);
+        o.WriteLine();
     }
 }

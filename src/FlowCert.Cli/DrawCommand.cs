@@ -27,7 +27,7 @@ public static class DrawCommand
         var extension = Path.GetExtension(outPath).ToLowerInvariant();
         if (extension is not (".svg" or ".dot"))
             throw new UserInputException($"{outPath}: a picture is written as .svg or .dot");
-        var g = GraphFiles.Read(graphPath, inputs, outputs);
+        var g = GraphInput.Read(graphPath, inputs, outputs);
         FlowResult? result = null;
         if (certPath is not null)
         {
@@ -35,13 +35,37 @@ public static class DrawCommand
             if (CanonicalForm.Sha256(result.Graph) != CanonicalForm.Sha256(g))
                 throw new UserInputException($"{certPath} is a certificate of another graph than {graphPath} (their canonical forms differ)");
             result = result with { Graph = g };
+            Verify(result, certPath);
         }
-        var title = FlowPicture.TitleFor(Path.GetFileName(graphPath), result);
+        var title = FlowPicture.TitleFor(GraphInput.IsStandardInput(graphPath) ? GraphInput.StandardInputName : Path.GetFileName(graphPath), result);
         var text = extension == ".svg"
             ? SvgPicture.Write(PictureLayout.Arrange(g, result, title))
             : DotPicture.Write(g, result, title);
         SafeFile.WriteAllText(outPath, text, certPath is null ? [graphPath] : [graphPath, certPath]);
-        stdout.WriteLine($"wrote {outPath}");
+        stdout.WriteLine($"wrote {Escaped.Of(outPath)}");
         return ExitCode.Flow;
+    }
+
+    /// <summary>
+    /// Refuses a certificate that is not valid before drawing it: a flow must pass the flow conditions
+    /// (as schedule checks them); a proof of absence must agree with the solver, which finds no flow and
+    /// the same blocked set (a referee checks the witnesses themselves with flowcheck).
+    /// </summary>
+    private static void Verify(FlowResult result, string certPath)
+    {
+        if (result.HasFlow)
+        {
+            try { Schedules.ScheduleBuilder.Build(result); }
+            catch (Exception e) when (e is Schedules.ScheduleException or WeightNotInFieldException)
+            { throw new UserInputException($"{certPath}: not drawn, the certificate is invalid: {e.Message}"); }
+            return;
+        }
+        FlowResult again;
+        try { again = FlowSolver.Solve(result.Graph, result.Field, result.Kind); }
+        catch (WeightNotInFieldException e) { throw new UserInputException($"{certPath}: not drawn, the certificate is invalid: {e.Message}"); }
+        if (again.HasFlow)
+            throw new UserInputException($"{certPath}: not drawn, the certificate is invalid: it claims no flow, but a flow of depth {again.Depth} exists");
+        if (!again.Obstruction!.Nodes.Order().SequenceEqual(result.Obstruction!.Nodes.Order()))
+            throw new UserInputException($"{certPath}: not drawn, the certificate is invalid: its blocked set is not the one the solver finds");
     }
 }

@@ -16,7 +16,7 @@ public static class GenerateCommand
         var degree = new Option<int?>("--degree") { Description = "regular: the degree of every node" };
         var inputCount = new Option<int?>("--input-count") { Description = "random, regular: the first K nodes are inputs" };
         var outputCount = new Option<int?>("--output-count") { Description = "random, regular: the last K nodes are outputs" };
-        var seed = new Option<ulong>("--seed") { Description = "seed of the random structure and weights (default 0)" };
+        var seed = new SeedOption("seed of the random structure and weights (default 0)", 0);
         var weight = new Option<string?>("--weight") { Description = "one weight for every edge (default 1)" };
         var directionWeights = new Option<string?>("--direction-weights") { Description = "a weight per lattice direction, such as h=1,v=-1/2 (others weigh 1)" };
         var randomWeights = new Option<string?>("--random-weights") { Description = "draw each edge's weight from this list, such as 1,-1,1/2, using --seed" };
@@ -49,7 +49,7 @@ public static class GenerateCommand
         var format = GraphFiles.FormatOf(outPath);
         var g = FamilyGenerator.Generate(request);
         SafeFile.WriteAllText(outPath, GraphFiles.Write(g, format));
-        stdout.WriteLine($"wrote {outPath}: {request.Family} {request.Size}, {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + ConvertCommand.TerminalsNote(g, format));
+        stdout.WriteLine($"wrote {Escaped.Of(outPath)}: {request.Family} {request.Size}, {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + ConvertCommand.TerminalsNote(g, format));
         return ExitCode.Flow;
     }
 }

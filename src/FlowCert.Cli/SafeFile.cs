@@ -17,6 +17,11 @@ public static class SafeFile
 
     /// <summary>Writes text to path atomically; refuses to write over any of the protected paths.</summary>
     public static void WriteAllText(string path, string text, params string[] protectedPaths)
+        => Write(path, w => w.Write(text), protectedPaths);
+
+    /// <summary>Writes what <paramref name="write"/> writes (UTF-8, no byte order mark) to path atomically, streaming
+    /// it into the temporary file; refuses to write over any of the protected paths.</summary>
+    public static void Write(string path, Action<TextWriter> write, params string[] protectedPaths)
     {
         var full = Path.GetFullPath(path);
         foreach (var p in protectedPaths)
@@ -33,8 +38,8 @@ public static class SafeFile
         try
         {
             using (var stream = new FileStream(tmp, FileMode.CreateNew, FileAccess.Write))
-            using (var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(false)))
-                writer.Write(text);
+            using (var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(false), 1 << 16))
+                write(writer);
             File.Move(tmp, full, overwrite: true);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)

@@ -21,29 +21,41 @@ public static class SolveCommand
         var flow = new Option<string>("--flow") { Description = "general or causal", DefaultValueFactory = _ => "general" };
         var output = new PathOption("--out") { Description = "write the certificate (JSON) to this file" };
         var json = new Option<bool>("--json") { Description = "print one JSON object instead of the summary" };
-        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs)));
+        var quiet = new Option<bool>("--quiet") { Description = "no progress line on a terminal (none is shown with --json or when standard error is not a terminal)" };
+        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs, quiet };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs),
+            p.GetValue(quiet) || p.GetValue(json) || Console.IsErrorRedirected ? null : Console.Error));
         return cmd;
     }
 
+    /// <summary>Runs the command; <paramref name="terminal"/> (standard error, when it is a terminal) gets a progress line.</summary>
     public static int Execute(string graphPath, string fieldText, string flowText, string? outPath, bool json, TextWriter stdout,
-        string? inputs = null, string? outputs = null)
+        string? inputs = null, string? outputs = null, TextWriter? terminal = null)
     {
         var spec = FieldSpec.Parse(fieldText);
         var kind = CliApp.ParseKind(flowText);
         var clock = Stopwatch.StartNew();
-        var g = GraphFiles.Read(graphPath, inputs, outputs);
-        var parseSeconds = clock.Elapsed.TotalSeconds;
-        clock.Restart();
+        double parseSeconds, solveSeconds, writeSeconds;
         FlowResult result;
-        try { result = FlowSolver.Solve(g, spec, kind); }
-        catch (WeightNotInFieldException e) { throw new UserInputException($"{graphPath}: {e.Message}"); }
-        var solveSeconds = clock.Elapsed.TotalSeconds;
-        clock.Restart();
-        if (outPath is not null) SafeFile.WriteAllText(outPath, CertificateWriter.Write(result), graphPath);
-        var writeSeconds = clock.Elapsed.TotalSeconds;
+        using (var progress = terminal is null ? null : new TerminalProgress(terminal, "flowcert solve", $"reading {GraphInput.NameOf(graphPath)}"))
+        {
+            var g = GraphInput.Read(graphPath, inputs, outputs);
+            parseSeconds = clock.Elapsed.TotalSeconds;
+            if (g.Inputs.Count == 0 && g.Outputs.Count == 0 && g.NodeCount > 0)
+                Terminal.Warn($"{GraphInput.NameOf(graphPath)}: no terminals were given (no inputs and no outputs), so every node is measured; " +
+                              "graph6, sparse6 and Matrix Market files carry none: name them with --inputs and --outputs");
+            clock.Restart();
+            progress?.Phase("solving");
+            try { result = FlowSolver.Solve(g, spec, kind, progress); }
+            catch (WeightNotInFieldException e) { throw new UserInputException($"{GraphInput.NameOf(graphPath)}: {e.Message}"); }
+            solveSeconds = clock.Elapsed.TotalSeconds;
+            clock.Restart();
+            progress?.Phase($"writing {outPath}");
+            if (outPath is not null) SafeFile.Write(outPath, w => CertificateWriter.Write(result, w), graphPath);
+            writeSeconds = clock.Elapsed.TotalSeconds;
+        }
         if (json) WriteJson(stdout, result, parseSeconds, solveSeconds, writeSeconds);
-        else Summary.Write(stdout, graphPath, result, outPath);
+        else Summary.Write(stdout, GraphInput.NameOf(graphPath), result, outPath);
         return result.HasFlow ? ExitCode.Flow : ExitCode.NoFlow;
     }
 

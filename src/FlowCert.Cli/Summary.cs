@@ -18,10 +18,10 @@ public static class Summary
             var shown = string.Join(" ", list.Take(MaxNodesShown).Select(v => g.Names[v]));
             return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
         }
-        o.WriteLine($"graph     {source}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
+        o.WriteLine($"graph     {Escaped.Of(source)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
         o.WriteLine($"field     {r.Field.Name}    flow: {FlowKinds.Name(r.Kind)}");
         if (r.VanishedEdges.Count > 0)
-            o.WriteLine("warning   " + VanishingEdges.Warning(g, r.Field, r.VanishedEdges));
+            Terminal.Warn($"{source}: {VanishingEdges.Warning(g, r.Field, r.VanishedEdges)}");
         if (r.Obstruction is { } blocked)
         {
             o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");
@@ -35,6 +35,6 @@ public static class Summary
                 o.WriteLine($"round {i + 1,-3} {Names(r.Rounds[i])}");
             if (r.Depth > MaxRoundsShown) o.WriteLine($"          ... {r.Depth - MaxRoundsShown} more rounds in the certificate");
         }
-        o.WriteLine(certificatePath is null ? "certificate not written (use --out FILE)" : $"certificate {certificatePath}");
+        o.WriteLine(certificatePath is null ? "certificate not written (use --out FILE)" : $"certificate {Escaped.Of(certificatePath)}");
     }
 }

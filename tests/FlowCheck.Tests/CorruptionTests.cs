@@ -89,15 +89,18 @@ public class CorruptionTests(ITestOutputHelper output)
             Assert.True(rejected.GetValueOrDefault(name) > 0, $"corruption \"{name}\" never produced a rejected certificate");
     }
 
-    /// <summary>One JSON document without duplicate keys or trailing content, numbers kept exact; null otherwise.</summary>
+    /// <summary>One JSON document without duplicate keys or trailing content, numbers kept exact; null otherwise.
+    /// Strict RFC 8259 syntax is judged by System.Text.Json (no comments, trailing commas or single quotes,
+    /// which Newtonsoft.Json would let through), duplicate keys by Newtonsoft.Json.</summary>
     static JToken? ParseLikeAReferee(string text)
     {
         try
         {
+            using (System.Text.Json.JsonDocument.Parse(text)) { }
             using var reader = new JsonTextReader(new StringReader(text)) { DateParseHandling = DateParseHandling.None, FloatParseHandling = FloatParseHandling.Decimal };
             var token = JToken.ReadFrom(reader, new JsonLoadSettings { DuplicatePropertyNameHandling = DuplicatePropertyNameHandling.Error });
             return reader.Read() ? null : token;
         }
-        catch (JsonReaderException) { return null; }
+        catch (Exception e) when (e is JsonReaderException or System.Text.Json.JsonException) { return null; }
     }
 }

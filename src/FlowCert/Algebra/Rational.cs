@@ -88,7 +88,7 @@ public readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
 
     /// <summary>Canonical text: <c>a</c> or <c>a/b</c> with b &gt; 1.</summary>
     public override string ToString()
-        => Denominator.IsOne ? Numerator.ToString(Invariant) : Numerator.ToString(Invariant) + "/" + Denominator.ToString(Invariant);
+        => Denominator.IsOne ? DecimalText.Of(Numerator) : DecimalText.Of(Numerator) + "/" + DecimalText.Of(Denominator);
 
     private static readonly System.Globalization.CultureInfo Invariant = System.Globalization.CultureInfo.InvariantCulture;
     private static BigInteger ParseDigits(string digits) => BigInteger.Parse(digits, System.Globalization.NumberStyles.None, Invariant);

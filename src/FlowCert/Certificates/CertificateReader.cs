@@ -43,6 +43,15 @@ public static class CertificateReader
     // A JSON integer as a long, or null when it does not fit in 64 bits (Json.NET then holds a BigInteger).
     private static long? SmallInteger(JToken t) => ((JValue)t).Value is long l ? l : null;
 
+    // Why a JSON value is not a whole number, for "version" and "depth": a quoted number is a string.
+    private static string NotAWholeNumber(string what, JToken t)
+    {
+        var shown = Excerpt.Of(t.ToString(Newtonsoft.Json.Formatting.None));
+        return t.Type == JTokenType.String
+            ? $"{what} must be a JSON number such as 3, not the string {shown} (no quotes around numbers)"
+            : $"{what} must be a whole number, not {shown}";
+    }
+
     private static FlowResult ParseChecked(string text, string fileName)
     {
         var source = JsonSource.Load(text, fileName);
@@ -64,7 +73,7 @@ public static class CertificateReader
 
         if (Str(Required(root, "format"), "format") != CertificateWriter.Format) throw Bad(root["format"], $"unknown format '{Excerpt.Of((string)root["format"]!)}'");
         var version = Required(root, "version");
-        if (version.Type != JTokenType.Integer) throw Bad(version, $"version must be a whole number, not {Excerpt.Of(version.ToString(Newtonsoft.Json.Formatting.None))}");
+        if (version.Type != JTokenType.Integer) throw Bad(version, NotAWholeNumber("version", version));
         if (SmallInteger(version) is not { } v) throw Bad(version, "version is a number too large for 64 bits");
         if (v != CertificateWriter.Version) throw Bad(version, $"unknown version {v}: this reader knows version {CertificateWriter.Version}");
         var verdict = Str(Required(root, "verdict"), "verdict");
@@ -80,7 +89,14 @@ public static class CertificateReader
         var fieldName = Str(Required(root, "field"), "field");
         FieldSpec field;
         try { field = fieldName == "Q" ? FieldSpec.Rationals : fieldName.StartsWith('F') ? FieldSpec.Parse(fieldName) : throw new FieldSpecException(""); }
-        catch (FieldSpecException) { throw Bad(root["field"], $"unknown field '{Excerpt.Of(fieldName)}'"); }
+        catch (FieldSpecException e)
+        {
+            // F followed by digits is a dimension: say why it is refused (composite, 0 or 1, too large)
+            bool number = fieldName.Length > 1 && fieldName[1..].All(char.IsAsciiDigit);
+            throw Bad(root["field"], !number ? $"unknown field '{Excerpt.Of(fieldName)}': write Q or F followed by a prime, such as F3"
+                : fieldName.Length > 20 ? $"field '{Excerpt.Of(fieldName)}': the number is too large: primes below 2^62 are supported"
+                : $"field '{fieldName}': {e.Message}");
+        }
         if (field.Name != fieldName) throw Bad(root["field"], $"field '{fieldName}' is not written canonically ('{field.Name}')");
         if (Required(root, "producer") is not JObject producer) throw Bad(root["producer"], "producer must be an object");
         OnlyKeys(producer, ["name", "version"], "producer");
@@ -122,7 +138,7 @@ public static class CertificateReader
             foreach (var round in Required(root, "rounds") as JArray ?? throw Bad(root["rounds"], "rounds must be a list"))
                 rounds.Add(Nodes(round, "a round"));
             var depth = Required(root, "depth");
-            if (depth.Type != JTokenType.Integer) throw Bad(depth, $"depth must be a whole number, not {Excerpt.Of(depth.ToString(Newtonsoft.Json.Formatting.None))}");
+            if (depth.Type != JTokenType.Integer) throw Bad(depth, NotAWholeNumber("depth", depth));
             if (SmallInteger(depth) is not { } d) throw Bad(depth, "depth is a number too large for 64 bits");
             if (d != rounds.Count) throw Bad(depth, $"depth {d} is not the number of rounds ({rounds.Count})");
             foreach (var p in (Required(root, "corrections") as JObject ?? throw Bad(root["corrections"], "corrections must be an object")).Properties())

@@ -1,4 +1,3 @@
-using System.Text;
 using FlowCert.Flows;
 using FlowCert.Graphs;
 using FlowCert.Graphs.Formats;
@@ -23,43 +22,90 @@ public static class CertificateWriter
     /// <summary>The certificate text.</summary>
     public static string Write(FlowResult r)
     {
+        var text = new StringWriter { NewLine = "\n" };
+        Write(r, text);
+        return text.ToString();
+    }
+
+    /// <summary>
+    /// Writes the certificate to <paramref name="w"/> piece by piece, never holding its whole text (a
+    /// million-node certificate is over 100 MB); the bytes are those of <see cref="Write(FlowResult)"/>.
+    /// </summary>
+    public static void Write(FlowResult r, TextWriter w)
+    {
         var g = r.Graph;
-        string N(int v) => Quote(g.Names[v]);
-        string List(IEnumerable<int> nodes) => "[" + string.Join(", ", nodes.Select(N)) + "]";
-        string Vector(NodeVector v) => "{" + string.Join(", ", v.Entries.Select(e => $"{N(e.Node)}: {Quote(e.Value.ToString())}")) + "}";
-        static string Block(IEnumerable<string> lines, string indent, char open, char close)
+        void Name(int v) => JsonSource.WriteQuoted(w, g.Names[v]);
+        void List(IReadOnlyList<int> nodes)
         {
-            var items = lines.ToList();
-            return items.Count == 0 ? $"{open}{close}" : $"{open}\n{string.Join(",\n", items.Select(l => indent + "  " + l))}\n{indent}{close}";
+            w.Write('[');
+            for (int k = 0; k < nodes.Count; k++) { if (k > 0) w.Write(", "); Name(nodes[k]); }
+            w.Write(']');
+        }
+        void Vector(NodeVector v)
+        {
+            w.Write('{');
+            for (int k = 0; k < v.Count; k++)
+            {
+                if (k > 0) w.Write(", ");
+                Name(v.Nodes[k]);
+                w.Write(": \"");
+                w.Write(v[k].ToString());
+                w.Write('"');
+            }
+            w.Write('}');
+        }
+        // A block: "open", then one item a line indented two more than indent, then "close"; "openclose" when empty.
+        void Block<TItem>(IEnumerable<TItem> items, string indent, char open, char close, Action<TItem> item)
+        {
+            w.Write(open);
+            bool any = false;
+            foreach (var x in items)
+            {
+                w.Write(any ? ",\n" : "\n");
+                w.Write(indent);
+                w.Write("  ");
+                item(x);
+                any = true;
+            }
+            if (any) { w.Write('\n'); w.Write(indent); }
+            w.Write(close);
         }
 
-        var sb = new StringBuilder();
-        sb.Append("{\n");
-        sb.Append($"  \"format\": {Quote(Format)},\n");
-        sb.Append($"  \"version\": {Version},\n");
-        sb.Append($"  \"flow\": {Quote(FlowKinds.Name(r.Kind))},\n");
-        sb.Append($"  \"field\": {Quote(r.Field.Name)},\n");
-        sb.Append($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
-        sb.Append("  \"graph\": ").Append(GraphJson.WriteObject(g, "  ")).Append(",\n");
+        w.Write("{\n");
+        w.Write($"  \"format\": {Quote(Format)},\n");
+        w.Write($"  \"version\": {Version},\n");
+        w.Write($"  \"flow\": {Quote(FlowKinds.Name(r.Kind))},\n");
+        w.Write($"  \"field\": {Quote(r.Field.Name)},\n");
+        w.Write($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
+        w.Write("  \"graph\": ");
+        GraphJson.WriteObject(g, "  ", w);
+        w.Write(",\n");
         if (r.Obstruction is null)
         {
-            sb.Append("  \"verdict\": \"flow\",\n");
-            sb.Append($"  \"depth\": {r.Depth},\n");
-            sb.Append("  \"rounds\": ").Append(Block(r.Rounds.Select(List), "  ", '[', ']')).Append(",\n");
-            sb.Append("  \"corrections\": ").Append(Block(r.Corrections.OrderBy(kv => kv.Key).Select(kv => $"{N(kv.Key)}: {Vector(kv.Value)}"), "  ", '{', '}')).Append(",\n");
+            w.Write("  \"verdict\": \"flow\",\n");
+            w.Write($"  \"depth\": {r.Depth},\n");
+            w.Write("  \"rounds\": ");
+            Block(r.Rounds, "  ", '[', ']', List);
+            w.Write(",\n  \"corrections\": ");
+            var measured = Enumerable.Range(0, g.NodeCount).Where(r.Corrections.ContainsKey);
+            Block(measured, "  ", '{', '}', v => { Name(v); w.Write(": "); Vector(r.Corrections[v]); });
+            w.Write(",\n");
         }
         else
         {
-            sb.Append("  \"verdict\": \"noflow\",\n");
-            sb.Append("  \"obstruction\": {\n");
-            sb.Append($"    \"blocked\": {List(r.Obstruction.Nodes)}");
+            w.Write("  \"verdict\": \"noflow\",\n");
+            w.Write("  \"obstruction\": {\n");
+            w.Write("    \"blocked\": ");
+            List(r.Obstruction.Nodes);
             if (r.Kind == FlowKind.General)
-                sb.Append(",\n    \"witnesses\": ").Append(Block(r.Obstruction.Witnesses.Select(Vector), "    ", '[', ']'));
-            sb.Append("\n  },\n");
+            {
+                w.Write(",\n    \"witnesses\": ");
+                Block(r.Obstruction.Witnesses, "    ", '[', ']', Vector);
+            }
+            w.Write("\n  },\n");
         }
-        sb.Append($"  \"producer\": {{\"name\": {Quote(ProducerName)}, \"version\": {Quote(ProducerVersion)}}}\n");
-        sb.Append("}\n");
-        return sb.ToString();
+        w.Write($"  \"producer\": {{\"name\": {Quote(ProducerName)}, \"version\": {Quote(ProducerVersion)}}}\n");
+        w.Write("}\n");
     }
 
     private static string Quote(string s) => JsonSource.Quote(s);

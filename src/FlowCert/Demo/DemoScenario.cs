@@ -14,13 +14,19 @@ public sealed record DemoDesign(string Name, string Text, IReadOnlyList<FieldSpe
 
 /// <summary>
 /// The built-in demo: the fictional Merrow Reach lab's designs (a continuous-variable wire, a qutrit
-/// patch, a splitter whose flow depends on the field, and a merge that has no flow), each analysed
-/// over Q and small primes with both kinds of flow.
+/// patch, a splitter whose flow depends on the field, a merge that has no flow, and a continuous-variable
+/// delay pair whose two kinds of flow differ), each analysed over Q and small primes with both kinds of flow.
 /// </summary>
 public static class DemoScenario
 {
     /// <summary>The flow kinds each design is analysed for, generalized first.</summary>
     public static readonly FlowKind[] Kinds = [FlowKind.General, FlowKind.Causal];
+
+    /// <summary>
+    /// The design the demo surveys over every prime at once (`flowcert primes`): the lab's qutrit patch, asking
+    /// which qudit dimensions run it deterministically and how deep.
+    /// </summary>
+    public const string PrimeSurveyDesign = "qutrit-patch";
 
     /// <summary>The demo designs, each with the fields it is analysed over (Q, F_2, F_3, F_5).</summary>
     public static IReadOnlyList<DemoDesign> Designs()
@@ -32,6 +38,7 @@ public static class DemoScenario
             new("qutrit-patch", Resource("qutrit-patch"), all),
             new("splitter-pair", Resource("splitter-pair"), all),
             new("merge-attempt", Resource("merge-attempt"), all),
+            new("delay-pair", Resource("delay-pair"), all),
         ];
     }
 

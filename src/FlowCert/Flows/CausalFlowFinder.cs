@@ -10,9 +10,9 @@ namespace FlowCert.Flows;
 /// </summary>
 internal static class CausalFlowFinder
 {
-    public static FlowResult Find<T, TField>(FieldGraph<T, TField> g)
+    public static FlowResult Find<T, TField>(FieldGraph<T, TField> g, IProgress<SolveProgress>? progress = null)
         where T : struct where TField : struct, IField<T>
-        => LayeredSearch.Run(g, FlowKind.Causal, state => Step(g, state));
+        => LayeredSearch.Run(g, FlowKind.Causal, state => Step(g, state), progress);
 
     private static LayerOutcome Step<T, TField>(FieldGraph<T, TField> g, LayerState state)
         where T : struct where TField : struct, IField<T>

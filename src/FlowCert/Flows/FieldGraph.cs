@@ -30,30 +30,40 @@ internal sealed class FieldGraph<T, TField> where T : struct where TField : stru
     {
         Graph = graph; Field = field; Spec = spec;
         int n = graph.NodeCount;
-        var nb = new List<(int, T)>[n];
-        for (int i = 0; i < n; i++) nb[i] = [];
+        // Two passes over the edges into exact-size arrays (no per-node lists): count, then fill.
+        var degree = new int[n];
+        var mapped = new T[graph.Edges.Count];
+        var kept = new bool[graph.Edges.Count];
         var vanished = new List<WeightedEdge>();
-        foreach (var e in graph.Edges)
+        for (int k = 0; k < graph.Edges.Count; k++)
         {
-            T w;
-            try { w = field.FromRational(e.Weight); }
+            var e = graph.Edges[k];
+            try { mapped[k] = field.FromRational(e.Weight); }
             catch (NotInFieldException)
             {
                 throw new WeightNotInFieldException(
                     $"edge {graph.Names[e.U]} {graph.Names[e.V]} has weight {e.Weight}, which has no value in {spec.Name}: {spec.Prime} divides its denominator");
             }
-            if (field.IsZero(w)) { vanished.Add(e); continue; }
-            nb[e.U].Add((e.V, w));
-            nb[e.V].Add((e.U, w));
+            if (field.IsZero(mapped[k])) { vanished.Add(e); continue; }
+            kept[k] = true;
+            degree[e.U]++;
+            degree[e.V]++;
         }
         Neighbours = new int[n][];
         Weights = new T[n][];
-        for (int i = 0; i < n; i++)
+        for (int i = 0; i < n; i++) { Neighbours[i] = new int[degree[i]]; Weights[i] = new T[degree[i]]; }
+        var fill = new int[n];
+        for (int k = 0; k < graph.Edges.Count; k++)
         {
-            nb[i].Sort((a, b) => a.Item1.CompareTo(b.Item1));
-            Neighbours[i] = nb[i].Select(x => x.Item1).ToArray();
-            Weights[i] = nb[i].Select(x => x.Item2).ToArray();
+            if (!kept[k]) continue;
+            var (u, v) = (graph.Edges[k].U, graph.Edges[k].V);
+            (Neighbours[u][fill[u]], Weights[u][fill[u]++]) = (v, mapped[k]);
+            (Neighbours[v][fill[v]], Weights[v][fill[v]++]) = (u, mapped[k]);
         }
+        // Edges come sorted by (U, V), which already sorts every list; sort anyway if a list is not.
+        for (int i = 0; i < n; i++)
+            for (int j = 1; j < degree[i]; j++)
+                if (Neighbours[i][j - 1] > Neighbours[i][j]) { Array.Sort(Neighbours[i], Weights[i]); break; }
         Vanished = vanished;
     }
 

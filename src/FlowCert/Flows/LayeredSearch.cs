@@ -16,7 +16,8 @@ internal readonly record struct LayerOutcome(IReadOnlyDictionary<int, NodeVector
 /// </summary>
 internal static class LayeredSearch
 {
-    public static FlowResult Run<T, TField>(FieldGraph<T, TField> g, FlowKind kind, Func<LayerState, LayerOutcome> step)
+    public static FlowResult Run<T, TField>(FieldGraph<T, TField> g, FlowKind kind, Func<LayerState, LayerOutcome> step,
+        IProgress<SolveProgress>? progress = null)
         where T : struct where TField : struct, IField<T>
     {
         var state = new LayerState(g.Neighbours, g.Graph.Inputs, g.Graph.Outputs);
@@ -29,6 +30,7 @@ internal static class LayeredSearch
             {
                 foreach (var (v, c) in layer) corrections[v] = c;
                 state.AddLayer(layer.Keys.Order().ToArray());
+                progress?.Report(new SolveProgress(state.Layers.Count, g.Graph.NodeCount - state.UnprocessedCount, g.Graph.NodeCount));
             }
             else blocked = outcome.Blocked;
         }

@@ -9,19 +9,35 @@ public static class CanonicalForm
     /// <summary>The canonical text: input, output, isolated nodes, edges; LF line ends.</summary>
     public static string Write(OpenGraph g)
     {
-        var sb = new StringBuilder();
-        sb.Append("input");
-        foreach (var i in g.SortedInputs) sb.Append(' ').Append(g.Names[i]);
-        sb.Append('\n').Append("output");
-        foreach (var o in g.SortedOutputs) sb.Append(' ').Append(g.Names[o]);
-        sb.Append('\n');
-        foreach (var v in g.IsolatedNodes()) sb.Append("node ").Append(g.Names[v]).Append('\n');
-        foreach (var e in g.Edges)
-            sb.Append("edge ").Append(g.Names[e.U]).Append(' ').Append(g.Names[e.V]).Append(' ').Append(e.Weight.ToString()).Append('\n');
-        return sb.ToString();
+        var text = new StringWriter { NewLine = "\n" };
+        Write(g, text);
+        return text.ToString();
     }
 
-    /// <summary>Lowercase hex SHA-256 of the UTF-8 canonical text.</summary>
+    /// <summary>Writes the canonical text of <see cref="Write(OpenGraph)"/> to <paramref name="w"/>, piece by piece.</summary>
+    public static void Write(OpenGraph g, TextWriter w)
+    {
+        w.Write("input");
+        foreach (var i in g.SortedInputs) { w.Write(' '); w.Write(g.Names[i]); }
+        w.Write('\n');
+        w.Write("output");
+        foreach (var o in g.SortedOutputs) { w.Write(' '); w.Write(g.Names[o]); }
+        w.Write('\n');
+        foreach (var v in g.IsolatedNodes()) { w.Write("node "); w.Write(g.Names[v]); w.Write('\n'); }
+        foreach (var e in g.Edges)
+        {
+            w.Write("edge "); w.Write(g.Names[e.U]); w.Write(' '); w.Write(g.Names[e.V]); w.Write(' ');
+            w.Write(e.Weight.ToString()); w.Write('\n');
+        }
+    }
+
+    /// <summary>Lowercase hex SHA-256 of the UTF-8 canonical text, hashed as it is written (the text is never held whole).</summary>
     public static string Sha256(OpenGraph g)
-        => Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(Write(g))));
+    {
+        using var sha = SHA256.Create();
+        using (var hashing = new CryptoStream(Stream.Null, sha, CryptoStreamMode.Write, leaveOpen: true))
+        using (var w = new StreamWriter(hashing, new UTF8Encoding(false), 1 << 16))
+            Write(g, w);
+        return Convert.ToHexStringLower(sha.Hash!);
+    }
 }

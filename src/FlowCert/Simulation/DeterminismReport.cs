@@ -9,11 +9,12 @@ namespace FlowCert.Simulation;
 /// M_0 the all-zero branch, |.| the Frobenius norm and N = sqrt(d_in / p^|M|) the norm every branch has
 /// when the pattern is deterministic. Probabilities are Born-rule weights |M_s psi|^2 of one random
 /// input state psi; their relative spread is (max - min) * p^|M| (zero when every branch is as likely).
+/// <see cref="Amplitudes"/> is the peak size of the state, p^(<see cref="PeakLive"/> + reference qudits).
 /// </summary>
 public sealed record DeterminismReport(
     int Dimension, int Qudits, int ReferenceQudits, long Amplitudes, int MeasuredNodes,
     bool Exhaustive, int BranchesCompared, double MaxDeviation, int[]? WorstBranch,
-    double MinProbability, double MaxProbability, double ProbabilitySum, double RelativeSpread)
+    double MinProbability, double MaxProbability, double ProbabilitySum, double RelativeSpread, int PeakLive)
 {
     /// <summary>Deviations and relative spreads at most this are rounding, not physics.</summary>
     public const double Tolerance = 1e-9;
@@ -67,6 +68,6 @@ internal sealed class DeterminismComparison(QuditPattern pattern, OutcomeBranche
         double branches = Math.Pow(pattern.Dimension, pattern.Order.Count);
         return new DeterminismReport(pattern.Dimension, g.NodeCount, g.Inputs.Count, pattern.Amplitudes, pattern.Order.Count,
             selection.IsExhaustive, count, maxDeviation, worst, minProbability, maxProbability, probabilitySum,
-            (maxProbability - minProbability) * branches);
+            (maxProbability - minProbability) * branches, pattern.Plan.PeakLive);
     }
 }

@@ -4,11 +4,12 @@ using FlowCert.Graphs;
 namespace FlowCert.Simulation;
 
 /// <summary>
-/// Runs a compiled pattern branch by branch (flows.md section 7): prepares the graph state with the inputs
-/// entangled to a reference, measures in measurement order with each basis adapted to the node's frame
-/// (D' = X^a D X^-a), re-reads each outcome as raw - b, folds X^(m c_v) Z^(m A c_v) into the frames of
-/// the other nodes, and finally applies (X^a Z^b)^-1 to the outputs. Branches share their common prefix
-/// (depth-first), so enumerating all p^|M| of them costs about |M| times one preparation.
+/// Runs a compiled pattern branch by branch (flows.md section 7), following the schedule: each node is
+/// prepared just before it is first needed (<see cref="LivePlan"/>), inputs entangled with a reference;
+/// nodes are measured in measurement order with each basis adapted to the node's frame (D' = X^a D X^-a),
+/// each outcome re-read as raw - b, X^(m c_v) Z^(m A c_v) folded into the frames of the other nodes, and
+/// finally (X^a Z^b)^-1 applied to the outputs. A measured node leaves the register, so memory follows
+/// the number of live nodes. Branches share their common prefix (depth-first).
 /// </summary>
 public static class OutcomeTreeSimulator
 {
@@ -33,7 +34,7 @@ public static class OutcomeTreeSimulator
         else if (Math.Pow(pattern.Dimension, depth) > OutcomeBranches.MaxExhaustive)
             throw new SimulationException($"--branches all would enumerate {pattern.Dimension}^{depth} outcome strings, more than 2^20: sample some with --branches K");
         var state = new Walk(pattern, faults, visit, new int[n], new int[n], new int[n], new int[n], new int[n], new int[n]);
-        state.Step(0, GraphStateVector.Prepare(g, pattern.Dimension), sample);
+        state.Step(0, pattern.Plan.Start(), sample);
     }
 
     private static List<int[]> Sample(QuditPattern pattern, OutcomeBranches branches)
@@ -45,6 +46,17 @@ public static class OutcomeTreeSimulator
         return strings;
     }
 
+    /// <summary>
+    /// The measurement basis, in one place: the bra of raw outcome <paramref name="raw"/> when node v is
+    /// measured under X-frame a, that is &lt;b_raw| for D' = X^a D X^-a (flows.md section 7).
+    /// </summary>
+    internal static Complex[] MeasurementBra(QuditPattern pattern, FrameFault faults, int v, int a, int raw)
+    {
+        int shift = faults.HasFlag(FrameFault.SkipAngleAdaptation) ? 0 : faults.HasFlag(FrameFault.FlipAngleAdaptation) ? -a : a;
+        var adapted = QuditOperators.AdaptedAngle(pattern.Angles[v], shift);
+        return QuditOperators.OutcomeBra(adapted, raw);
+    }
+
     private sealed record Walk(QuditPattern P, FrameFault Faults, Action<BranchRecord> Visit,
         int[] A, int[] B, int[] Raw, int[] Outcome, int[] UsedA, int[] UsedB)
     {
@@ -53,14 +65,13 @@ public static class OutcomeTreeSimulator
         public void Step(int level, QuditRegister register, List<int[]>? sample)
         {
             int p = P.Dimension;
+            register = P.Plan.Prepare(register, level);
             if (level == P.Order.Count) { Leaf(register); return; }
             int v = P.Order[level];
-            int shift = Faults.HasFlag(FrameFault.SkipAngleAdaptation) ? 0 : Faults.HasFlag(FrameFault.FlipAngleAdaptation) ? -A[v] : A[v];
-            var adapted = QuditOperators.AdaptedAngle(P.Angles[v], shift);
             IEnumerable<int> outcomes = sample is null ? Enumerable.Range(0, p) : sample.Select(s => s[level]).Distinct().Order();
             foreach (var raw in outcomes)
             {
-                var child = register.Project(v, QuditOperators.OutcomeBra(adapted, raw));
+                var child = register.Project(v, MeasurementBra(P, Faults, v, A[v], raw));
                 int m = Mod(Faults.HasFlag(FrameFault.FlipReadout) ? raw + B[v] : raw - B[v]);
                 int sign = Faults.HasFlag(FrameFault.FlipCorrectionSign) ? -1 : 1;
                 var next = this with { A = (int[])A.Clone(), B = (int[])B.Clone(), Raw = (int[])Raw.Clone(), Outcome = (int[])Outcome.Clone(), UsedA = (int[])UsedA.Clone(), UsedB = (int[])UsedB.Clone() };
@@ -89,7 +100,7 @@ public static class OutcomeTreeSimulator
                 register.Apply(o, undo);
             }
             double scale = Math.Sqrt(Math.Pow(p, g.Inputs.Count));
-            var map = register.ToMatrix(outputs, g.SortedInputs.Select(GraphStateVector.ReferenceLabel).ToArray()) * new Complex(scale, 0);
+            var map = register.ToMatrix(outputs, g.SortedInputs.Select(LivePlan.ReferenceLabel).ToArray()) * new Complex(scale, 0);
             Visit(new BranchRecord((int[])Raw.Clone(), (int[])Outcome.Clone(), (int[])UsedA.Clone(), (int[])UsedB.Clone(), map));
         }
     }

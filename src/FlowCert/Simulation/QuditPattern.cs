@@ -12,11 +12,12 @@ public sealed class SimulationException(string message) : Exception(message);
 /// <summary>
 /// A flow certificate compiled for simulation over qudits of prime dimension p: the measurement order,
 /// c_v and A c_v as residues mod p, one random XY-type angle (a diagonal unitary D) per measured node and
-/// a random input state, all drawn from one seed.
+/// a random input state, all drawn from one seed (or angles given per node). Nodes are prepared as the
+/// schedule needs them (<see cref="LivePlan"/>): the limit is on the peak number of live qudits.
 /// </summary>
 public sealed class QuditPattern
 {
-    /// <summary>The most amplitudes a simulation may hold (2^22).</summary>
+    /// <summary>The most amplitudes a simulation may hold at its peak width (2^22).</summary>
     public const long MaxAmplitudes = 1L << 22;
 
     /// <summary>The graph of the certificate.</summary>
@@ -35,22 +36,26 @@ public sealed class QuditPattern
     public Complex[] InputState { get; }
     /// <summary>Violations of flows.md section 3 (empty for a valid certificate; the simulator runs anyway).</summary>
     public IReadOnlyList<string> Violations { get; }
-    /// <summary>The number of amplitudes of the prepared state: p^(nodes + inputs).</summary>
+    /// <summary>The number of amplitudes at the peak: p^(live nodes + reference qudits).</summary>
     public long Amplitudes { get; }
+    /// <summary>When each node is prepared, and the peak width.</summary>
+    public LivePlan Plan { get; }
 
     private QuditPattern(OpenGraph graph, int p, int[] order, Dictionary<int, int[]> c, Dictionary<int, int[]> image,
-        Dictionary<int, Complex[]> angles, Complex[] input, IReadOnlyList<string> violations, long amplitudes)
+        Dictionary<int, Complex[]> angles, Complex[] input, IReadOnlyList<string> violations, long amplitudes, LivePlan plan)
     {
         Graph = graph; Dimension = p; Order = order; Correction = c; Image = image; Angles = angles;
-        InputState = input; Violations = violations; Amplitudes = amplitudes;
+        InputState = input; Violations = violations; Amplitudes = amplitudes; Plan = plan;
     }
 
     /// <summary>
     /// Compiles a flow result for dimension p (null: the field's prime). Throws <see cref="SimulationException"/>
-    /// over Q, over a prime above 2^31 - 1, when p differs from the field's prime, or beyond <see cref="MaxAmplitudes"/>;
-    /// <see cref="ScheduleException"/> for a noflow or malformed certificate.
+    /// over Q, over a prime above 2^31 - 1, when p differs from the field's prime, or when the peak width
+    /// needs more than <see cref="MaxAmplitudes"/>; <see cref="ScheduleException"/> for a noflow or
+    /// malformed certificate. With <paramref name="angles"/> null every measured node gets a random
+    /// angle; otherwise the given diagonal where there is one and the identity (angle 0) elsewhere.
     /// </summary>
-    public static QuditPattern FromFlow(FlowResult r, ulong? dimension, ulong seed)
+    public static QuditPattern FromFlow(FlowResult r, ulong? dimension, ulong seed, IReadOnlyDictionary<int, Complex[]>? angles = null)
     {
         if (r.Field.IsRationals)
             throw new SimulationException("the certificate is over Q, the continuous-variable case: its modes have an infinite-dimensional " +
@@ -64,12 +69,13 @@ public sealed class QuditPattern
             throw new SimulationException($"--dim {d} does not match the certificate's field {r.Field.Name}: its corrections hold mod {p} only. " +
                 $"Use --dim {p}, or solve the graph over {d} and simulate that certificate.");
         var g = r.Graph;
-        double amplitudes = Math.Pow(p, g.NodeCount + g.Inputs.Count);
-        if (amplitudes > MaxAmplitudes)
-            throw new SimulationException($"simulating {g.NodeCount} qudits of dimension {p} with {g.Inputs.Count} reference qudit(s) for the inputs needs " +
-                $"{p}^{g.NodeCount + g.Inputs.Count} = {amplitudes:0} amplitudes, more than the limit of 2^22 = {MaxAmplitudes}: simulate a smaller design");
         var field = new PrimeField((ulong)p);
         var s = CorrectionSystem<ulong, PrimeField>.Create(r, field);
+        var plan = new LivePlan(g, p, s.Order);
+        double amplitudes = Math.Pow(p, plan.PeakQudits);
+        if (amplitudes > MaxAmplitudes)
+            throw new SimulationException($"the schedule keeps up to {plan.PeakLive} of {g.NodeCount} qudits of dimension {p} live at once, with " +
+                $"{plan.PeakQudits - plan.PeakLive} reference qudit(s) for the inputs: {p}^{plan.PeakQudits} = {amplitudes:0} amplitudes, more than the limit of 2^22 = {MaxAmplitudes}: simulate a narrower design");
         int[] Dense(SparseVector<ulong> x)
         {
             var a = new int[g.NodeCount];
@@ -77,8 +83,13 @@ public sealed class QuditPattern
             return a;
         }
         var random = new SeededRandom(seed);
-        var angles = new Dictionary<int, Complex[]>();
-        foreach (var v in s.Order) angles[v] = QuditOperators.RandomAngle(p, random);
+        var diagonals = new Dictionary<int, Complex[]>();
+        foreach (var v in s.Order)
+        {
+            var randomAngle = QuditOperators.RandomAngle(p, random);
+            diagonals[v] = angles is null ? randomAngle
+                : angles.TryGetValue(v, out var given) ? given : Enumerable.Repeat(Complex.One, p).ToArray();
+        }
         int dIn = (int)Math.Pow(p, g.Inputs.Count);
         var input = Enumerable.Range(0, dIn).Select(_ => new Complex(random.NextGaussian(), random.NextGaussian())).ToArray();
         double norm = Math.Sqrt(input.Sum(z => z.Magnitude * z.Magnitude));
@@ -86,6 +97,6 @@ public sealed class QuditPattern
         return new QuditPattern(g, p, s.Order,
             s.Order.ToDictionary(v => v, v => Dense(s.Correction[v])),
             s.Order.ToDictionary(v => v, v => Dense(s.Image[v])),
-            angles, input, FlowConditionCheck.Violations(s), (long)amplitudes);
+            diagonals, input, FlowConditionCheck.Violations(s), (long)amplitudes, plan);
     }
 }

@@ -61,6 +61,50 @@ public sealed class QuditRegister
         return new QuditRegister(p, labels, result);
     }
 
+    /// <summary>
+    /// A new register with one more qudit in the given state at the highest position (the tensor
+    /// product state (x) this): the width-following simulator prepares each node this way.
+    /// </summary>
+    public QuditRegister Extend(int label, IReadOnlyList<Complex> state)
+    {
+        int p = Dimension, size = Amplitudes.Length;
+        var result = new Complex[size * p];
+        for (int x = 0; x < p; x++)
+        {
+            var c = state[x];
+            if (c == Complex.Zero) continue;
+            for (int i = 0; i < size; i++) result[x * size + i] = c * Amplitudes[i];
+        }
+        return new QuditRegister(p, Labels.Append(label).ToArray(), result);
+    }
+
+    /// <summary>
+    /// A new register with two more qudits in the maximally entangled state sum_j |j>|j> / sqrt(p):
+    /// an input node and its reference qudit.
+    /// </summary>
+    public QuditRegister ExtendEntangled(int firstLabel, int secondLabel)
+    {
+        int p = Dimension, size = Amplitudes.Length;
+        var result = new Complex[size * p * p];
+        double norm = 1 / Math.Sqrt(p);
+        for (int j = 0; j < p; j++)
+            for (int i = 0; i < size; i++) result[(j * p + j) * size + i] = norm * Amplitudes[i];
+        return new QuditRegister(p, Labels.Append(firstLabel).Append(secondLabel).ToArray(), result);
+    }
+
+    /// <summary>Applies CZ^weight (|j, k> -> w^(weight j k) |j, k>) to two qudits, in place.</summary>
+    public void ApplyControlledPhase(int first, int second, int weight)
+    {
+        int p = Dimension, s1 = Stride(Position(first)), s2 = Stride(Position(second));
+        var phases = Enumerable.Range(0, p).Select(k => QuditOperators.RootOfUnity(p, (long)weight * k)).ToArray();
+        for (int i = 0; i < Amplitudes.Length; i++)
+        {
+            int j = i / s1 % p, k = i / s2 % p;
+            if (j == 0 || k == 0) continue;
+            Amplitudes[i] *= phases[j * k % p];
+        }
+    }
+
     /// <summary>Applies a p x p matrix to one qudit, in place.</summary>
     public void Apply(int label, Matrix<Complex> gate)
     {

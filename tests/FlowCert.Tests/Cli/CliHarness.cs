@@ -13,6 +13,15 @@ public sealed record CliRun(int ExitCode, string Stdout, string Stderr)
 /// <summary>Runs the flowcert command in-process (CliApp.Run) or as a real `dotnet FlowCert.Cli.dll` process.</summary>
 public static class Flowcert
 {
+    /// <summary>Runs in-process with <paramref name="standardInput"/> as standard input (for "-" as a file name).</summary>
+    public static CliRun WithInput(string standardInput, params string[] args)
+    {
+        var stdout = new StringWriter();
+        var stderr = new StringWriter();
+        int code = CliApp.Run(args, stdout, stderr, new StringReader(standardInput));
+        return new CliRun(code, stdout.ToString(), stderr.ToString());
+    }
+
     public static CliRun InProcess(params string[] args)
     {
         var stdout = new StringWriter();

@@ -39,7 +39,7 @@ public class DemoCommandTests
         Assert.Contains("Merrow Reach", run.Stdout);
 
         var graphs = Directory.GetFiles(w.PathOf("demo"), "*.ograph").Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray();
-        Assert.Equal(["loop-wire.ograph", "merge-attempt.ograph", "qutrit-patch.ograph", "splitter-pair.ograph"], graphs.Select(n => n!).ToArray());
+        Assert.Equal(["delay-pair.ograph", "loop-wire.ograph", "merge-attempt.ograph", "qutrit-patch.ograph", "splitter-pair.ograph"], graphs.Select(n => n!).ToArray());
         var certificates = ExpectedCertificates(w, "demo", graphs!);
         w.AssertExactly(["demo/", .. graphs.Select(g => "demo/" + g), .. certificates]);
         Assert.Contains($"{certificates.Count} certificates written", run.Stdout);

@@ -126,6 +126,7 @@ public class HostileInputTests
     [InlineData("depth", "9223372036854775808")]
     [InlineData("version", "9223372036854775808")]
     [InlineData("depth", "\"3\"")]
+    [InlineData("version", "\"3\"")]
     public void AnIntegerOutOfRangeOrAStringInACertificateIsExitTwo(string key, string value)
     {
         using var w = new Workspace();
@@ -138,7 +139,7 @@ public class HostileInputTests
             Assert.True(run.ExitCode == 2, string.Join(' ', args) + "\n" + run);
             Assert.Contains("bad.json:", run.Stderr);
             Assert.DoesNotContain("internal error", run.Stderr);
-            if (value.StartsWith('"')) Assert.Contains("must be a whole number", run.Stderr);
+            if (value.StartsWith('"')) Assert.Contains($"{key} must be a JSON number such as 3, not the string \"3\"", run.Stderr);
         }
     }
 

@@ -52,11 +52,32 @@ public class SimulateCommandTests
     }
 
     [Fact]
-    public void TooManyAmplitudesAreRefusedWithTheCount()
+    public void TheQutritPatchOverF5RunsWithinItsWidth()
     {
-        var (code, _, e) = Run("simulate", Corpus("qutrit-patch.ograph"), "--cert", Corpus("qutrit-patch.F5.general.json"));
-        Assert.Equal(2, code);
-        Assert.Contains("5^10 = 9765625 amplitudes", e);
+        // 5^10 amplitudes for the whole state, but never more than 3 live nodes and 2 references at once.
+        var (code, o, _) = Run("simulate", Corpus("qutrit-patch.ograph"), "--cert", Corpus("qutrit-patch.F5.general.json"), "--branches", "20");
+        Assert.Equal(0, code);
+        Assert.Contains("8 qudits, at most 3 live at once + 2 reference = 3125 amplitudes at the peak", o);
+    }
+
+    [Fact]
+    public void ATooWideScheduleIsRefusedWithTheCount()
+    {
+        // A 10 x 2 square patch over F_5: eleven nodes are live at once beside ten references, 5^21 amplitudes.
+        var dir = Directory.CreateTempSubdirectory("flowcert-simulate-").FullName;
+        try
+        {
+            var graph = Path.Combine(dir, "wide.ograph");
+            var cert = Path.Combine(dir, "wide.json");
+            Assert.Equal(0, Run("generate", "square", "--size", "10x2", "--out", graph).Code);
+            Assert.Equal(0, Run("solve", graph, "--field", "5", "--flow", "causal", "--out", cert).Code);
+            var (code, o, e) = Run("simulate", graph, "--cert", cert);
+            Assert.Equal(2, code);
+            Assert.Equal("", o);
+            Assert.Contains("up to 11 of 20 qudits of dimension 5 live at once, with 10 reference qudit(s) for the inputs: 5^21 = 476837158203125 amplitudes, more than the limit", e);
+            Assert.Single(e.Trim().Split('\n'));
+        }
+        finally { Directory.Delete(dir, true); }
     }
 
     [Fact]

@@ -35,6 +35,14 @@ public static partial class ExactDecimal
         return true;
     }
 
+    /// <summary>True when the text is a decimal whose exponent is beyond <see cref="MaxExponent"/> (such as <c>1e5000</c>), the one decimal <see cref="TryParse"/> refuses for its size.</summary>
+    public static bool ExponentTooLarge(string text)
+    {
+        var m = Pattern().Match(text);
+        return m.Success && m.Groups[4].Success
+            && (!long.TryParse(m.Groups[4].Value, System.Globalization.NumberStyles.AllowLeadingSign, System.Globalization.CultureInfo.InvariantCulture, out var exponent) || Math.Abs(exponent) > MaxExponent);
+    }
+
     /// <summary>
     /// Writes a rational as a plain decimal (<c>-0.5</c>, <c>3</c>, <c>0.125</c>) when it has one, that is
     /// when its denominator has no prime factor other than 2 and 5; false otherwise.

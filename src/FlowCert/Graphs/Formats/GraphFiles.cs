@@ -40,6 +40,26 @@ public static class GraphFiles
             $"{path}: unknown graph file extension '{ext}': use {string.Join(", ", Extensions.Select(x => x.Extension))}");
     }
 
+    /// <summary>
+    /// The format of a text without a file name (standard input), from its first characters: <c>{</c>
+    /// JSON, <c>%%MatrixMarket</c> Matrix Market, <c>:</c> or <c>&gt;&gt;sparse6&lt;&lt;</c> sparse6,
+    /// <c>&gt;&gt;graph6&lt;&lt;</c> or one line of graph6 characters (63 to 126) graph6; anything else .ograph.
+    /// </summary>
+    public static GraphFileFormat Detect(string text)
+    {
+        var start = text.AsSpan().TrimStart(" \t\r\n\ufeff");
+        if (start.StartsWith("{")) return GraphFileFormat.Json;
+        if (start.StartsWith("%%MatrixMarket", StringComparison.OrdinalIgnoreCase)) return GraphFileFormat.MatrixMarket;
+        if (start.StartsWith(":") || start.StartsWith(">>sparse6<<")) return GraphFileFormat.Sparse6;
+        if (start.StartsWith(">>graph6<<")) return GraphFileFormat.Graph6;
+        var first = start.IndexOfAny('\n', '\r') is var end and >= 0 ? start[..end] : start;
+        // An .ograph line starts with a keyword, a comment or a blank; a graph6 line is one word of characters 63..126
+        foreach (var keyword in (string[])["input", "output", "node", "edge", "at", "#"])
+            if (first.StartsWith(keyword, StringComparison.Ordinal)) return GraphFileFormat.Ograph;
+        if (first.Length > 0 && !first.ContainsAnyExceptInRange((char)63, (char)126)) return GraphFileFormat.Graph6;
+        return GraphFileFormat.Ograph;
+    }
+
     /// <summary>True for the formats that name their own inputs and outputs.</summary>
     public static bool HasTerminals(GraphFileFormat f) => f is GraphFileFormat.Ograph or GraphFileFormat.Json;
 

@@ -24,19 +24,47 @@ public static class GraphJson
     /// </summary>
     public static string WriteObject(OpenGraph g, string indent)
     {
-        string N(int v) => JsonSource.Quote(g.Names[v]);
-        string List(IEnumerable<int> nodes) => "[" + string.Join(", ", nodes.Select(N)) + "]";
-        var sb = new StringBuilder("{\n");
-        sb.Append($"{indent}  \"inputs\": {List(g.SortedInputs)},\n");
-        sb.Append($"{indent}  \"outputs\": {List(g.SortedOutputs)},\n");
-        sb.Append($"{indent}  \"nodes\": {List(Enumerable.Range(0, g.NodeCount))},\n");
-        sb.Append($"{indent}  \"edges\": ");
-        if (g.Edges.Count == 0) sb.Append("[]");
+        var text = new StringWriter { NewLine = "\n" };
+        WriteObject(g, indent, text);
+        return text.ToString();
+    }
+
+    /// <summary>Writes the graph object of <see cref="WriteObject(OpenGraph, string)"/> to <paramref name="w"/>, piece by piece.</summary>
+    public static void WriteObject(OpenGraph g, string indent, TextWriter w)
+    {
+        void N(int v) => JsonSource.WriteQuoted(w, g.Names[v]);
+        void List(string key, IEnumerable<int> nodes)
+        {
+            w.Write($"{indent}  \"{key}\": [");
+            bool first = true;
+            foreach (var v in nodes) { if (!first) w.Write(", "); N(v); first = false; }
+            w.Write("],\n");
+        }
+        w.Write("{\n");
+        List("inputs", g.SortedInputs);
+        List("outputs", g.SortedOutputs);
+        List("nodes", Enumerable.Range(0, g.NodeCount));
+        w.Write($"{indent}  \"edges\": ");
+        if (g.Edges.Count == 0) w.Write("[]");
         else
-            sb.Append("[\n")
-              .Append(string.Join(",\n", g.Edges.Select(e => $"{indent}    [{N(e.U)}, {N(e.V)}, {JsonSource.Quote(e.Weight.ToString())}]")))
-              .Append($"\n{indent}  ]");
-        return sb.Append($"\n{indent}}}").ToString();
+        {
+            w.Write("[\n");
+            for (int k = 0; k < g.Edges.Count; k++)
+            {
+                var e = g.Edges[k];
+                if (k > 0) w.Write(",\n");
+                w.Write(indent);
+                w.Write("    [");
+                N(e.U);
+                w.Write(", ");
+                N(e.V);
+                w.Write(", ");
+                JsonSource.WriteQuoted(w, e.Weight.ToString());
+                w.Write(']');
+            }
+            w.Write($"\n{indent}  ]");
+        }
+        w.Write($"\n{indent}}}");
     }
 
     /// <summary>Reads a graph JSON file; errors name the file, line and column.</summary>

@@ -67,6 +67,16 @@ public sealed class JsonSource
         return new GraphFormatException(FileName, line, column, problem);
     }
 
+    /// <summary>Writes the string as the JSON string literal <see cref="Quote"/> makes (most names need no escape and are copied as they are).</summary>
+    public static void WriteQuoted(TextWriter w, string s)
+    {
+        foreach (var c in s)
+            if (c == '"' || c == '\\' || c < 0x20 || c > 0x7e) { w.Write(Quote(s)); return; }
+        w.Write('"');
+        w.Write(s);
+        w.Write('"');
+    }
+
     /// <summary>A JSON string literal: quotes and backslashes escaped, anything outside printable ASCII as \uXXXX.</summary>
     public static string Quote(string s)
     {

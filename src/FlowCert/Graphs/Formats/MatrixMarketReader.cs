@@ -111,7 +111,10 @@ public static partial class MatrixMarketReader
                 bool ok = field == MatrixMarketField.Integer
                     ? IntegerPattern().IsMatch(t.Text) && Rational.TryParse(t.Text.TrimStart('+'), out value)
                     : ExactDecimal.TryParse(t.Text, out value);
-                if (!ok) throw Error(lineNo, t.Column, $"bad {Word(3)} value '{t.Text}'");
+                if (!ok)
+                    throw Error(lineNo, t.Column, $"bad {Word(3)} value '{Excerpt.Of(t.Text)}': " + (field == MatrixMarketField.Integer ? "expected an integer such as -3"
+                        : ExactDecimal.ExponentTooLarge(t.Text) ? $"its exponent is beyond ±{ExactDecimal.MaxExponent}; values are read exactly, so such a number would have thousands of digits"
+                        : "expected a decimal such as -0.25, 3 or 1.5e-3"));
             }
             entries.Add(new MatrixMarketEntry(i, j, value, lineNo, tokens[expected - 1].Column));
         }

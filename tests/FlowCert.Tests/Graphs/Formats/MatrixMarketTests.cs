@@ -139,6 +139,8 @@ public class MatrixMarketTests
     [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 1\n4 1 2\n", 3, 1, "bad row '4'")]
     [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 1\n2 1 two\n", 3, 5, "bad real value 'two'")]
     [InlineData("%%MatrixMarket matrix coordinate integer symmetric\n3 3 1\n2 1 1.5\n", 3, 5, "bad integer value")]
+    [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 1\n2 1 1e5000\n", 3, 5, "bad real value '1e5000': its exponent is beyond ±4000; values are read exactly")]
+    [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 1\n2 1 -1E-99999999999999999999\n", 3, 5, "its exponent is beyond ±4000")]
     [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 2\n2 1 1\n", 4, 1, "1 of the 2 entries")]
     [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 1\n2 1 1\n3 1 1\n", 4, 1, "more entries")]
     [InlineData("%%MatrixMarket matrix coordinate real symmetric\n3 3 2\n2 1 1\n1 2 1\n", 4, 5, "repeats entry (2,1) of line 3")]

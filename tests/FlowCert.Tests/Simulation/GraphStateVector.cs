@@ -1,10 +1,12 @@
 using System.Numerics;
 using FlowCert.Algebra;
 using FlowCert.Graphs;
+using FlowCert.Simulation;
 
-namespace FlowCert.Simulation;
+namespace FlowCert.Tests.Simulation;
 
 /// <summary>
+/// The full state-vector preparation of the reference simulator (moved from the library unchanged).
 /// Prepares the graph state of flows.md section 7 over qudits of prime dimension p: every non-input in |+>,
 /// every input maximally entangled with a reference qudit (label -1 - v for input v), then
 /// prod CZ^A[u][v] with the weights reduced mod p. Reading the reference as the column index of the
