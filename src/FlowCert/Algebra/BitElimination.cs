@@ -11,7 +11,7 @@ namespace FlowCert.Algebra;
 /// rows of a group are reduced among themselves, every combination of them is tabulated once (Gray code
 /// order, one XOR per table entry), and each other row then takes one table lookup and one XOR per group
 /// instead of one XOR per pivot: the Method of Four Russians (as published in "Efficient Multiplication
-/// of Dense Matrices over GF(2)", arXiv:0811.1714; the grouping here is this project's own). Row XORs use
+/// of Dense Matrices over GF(2)", arXiv:0811.1714, from memory; the grouping here is this project's own). Row XORs use
 /// 256-bit vectors.
 /// </summary>
 internal static class BitElimination
