@@ -1,9 +1,10 @@
 using System.CommandLine;
+using FlowCert.Graphs;
 using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
 
-/// <summary><c>flowcert convert IN OUT [--inputs NAMES] [--outputs NAMES]</c>: from one graph format to another, by extension.</summary>
+/// <summary><c>flowcert convert IN --out OUT [--inputs NAMES] [--outputs NAMES]</c> (or <c>convert IN OUT</c>, the older spelling): from one graph format to another, by extension.</summary>
 public static class ConvertCommand
 {
     /// <summary>The --inputs option shared by every command that reads a graph file.</summary>
@@ -17,11 +18,19 @@ public static class ConvertCommand
     public static Command Create(TextWriter stdout)
     {
         var input = new PathArgument("IN") { Description = "graph to read: .ograph, .g6, .s6, .mtx or .json" };
-        var output = new PathArgument("OUT") { Description = "graph to write: .ograph (canonical form), .g6, .s6, .mtx, .json or .dot" };
+        var output = new PathArgument("OUT") { Description = "graph to write (the older spelling of --out)", Arity = System.CommandLine.ArgumentArity.ZeroOrOne };
+        var outOption = new PathOption("--out") { Description = "graph to write: .ograph (canonical form), .g6, .s6, .mtx, .json or .dot" };
         var inputs = InputsOption();
         var outputs = OutputsOption();
-        var cmd = new Command("convert", "Convert a graph between file formats, chosen by the file extensions") { input, output, inputs, outputs };
-        cmd.SetAction(p => Execute(p.GetValue(input)!, p.GetValue(output)!, p.GetValue(inputs), p.GetValue(outputs), stdout));
+        var cmd = new Command("convert", "Convert a graph between file formats, chosen by the file extensions") { input, output, outOption, inputs, outputs };
+        cmd.SetAction(p =>
+        {
+            string? positional = p.GetValue(output), option = p.GetValue(outOption);
+            if (positional is not null && option is not null && positional != option)
+                throw new UserInputException($"two outputs given ({positional} and --out {option}): give one, with --out");
+            var target = option ?? positional ?? throw new UserInputException("convert needs the file to write: flowcert convert IN --out OUT");
+            return Execute(p.GetValue(input)!, target, p.GetValue(inputs), p.GetValue(outputs), stdout);
+        });
         return cmd;
     }
 
@@ -32,7 +41,7 @@ public static class ConvertCommand
         // The canonical form carries no position hints (docs/formats.md), so .ograph output is exactly it.
         var text = format == GraphFileFormat.Ograph ? Graphs.CanonicalForm.Write(g) : GraphFiles.Write(g, format);
         SafeFile.WriteAllText(outPath, text, inPath);
-        stdout.WriteLine($"wrote {Escaped.Of(outPath)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + TerminalsNote(g, format));
+        stdout.WriteLine($"wrote {Escaped.Of(outPath)}: {Counted.Of(g.NodeCount, "node")}, {Counted.Of(g.Edges.Count, "edge")}, {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}" + TerminalsNote(g, format));
         return ExitCode.Flow;
     }
 

@@ -1,4 +1,6 @@
 using System.CommandLine;
+using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
 using FlowCert.Certificates;
 using FlowCert.Demo;
 using FlowCert.Flows;
@@ -28,7 +30,7 @@ public static class DemoCommand
         {
             var g = design.Graph;
             SafeFile.WriteAllText(Path.Combine(outDir, design.Name + ".ograph"), design.Text);
-            o.WriteLine($"{design.Name}: {g.NodeCount} nodes, {g.Edges.Count} edges, inputs {string.Join(" ", g.SortedInputs.Select(v => g.Names[v]))}, outputs {string.Join(" ", g.SortedOutputs.Select(v => g.Names[v]))}");
+            o.WriteLine($"{design.Name}: {g.NodeCount} nodes, {g.Edges.Count} edges, inputs {string.Join(" ", g.SortedInputs.Select(v => g.Names[v]).Order(NaturalNameOrder.Instance))}, outputs {string.Join(" ", g.SortedOutputs.Select(v => g.Names[v]).Order(NaturalNameOrder.Instance))}");
             foreach (var field in design.Fields)
             {
                 FlowResult[] results;
@@ -41,11 +43,11 @@ public static class DemoCommand
                     SafeFile.WriteAllText(Path.Combine(outDir, $"{design.Name}.{field.Name}.{kind}.json"), CertificateWriter.Write(r));
                     written++;
                     cells.Add(r.Obstruction is { } b
-                        ? $"{kind}: no flow, blocked {{{string.Join(" ", b.Nodes.Select(v => g.Names[v]))}}}"
+                        ? $"{kind}: no flow, blocked {{{string.Join(" ", b.Nodes.Select(v => g.Names[v]).Order(NaturalNameOrder.Instance))}}}"
                         : $"{kind}: depth {r.Depth}");
                 }
                 var vanished = results[0].VanishedEdges.Count;
-                o.WriteLine($"  {field.Name,-3} {string.Join(" | ", cells)}{(vanished > 0 ? $"   ({vanished} edge(s) vanish in {field.Name})" : "")}");
+                o.WriteLine($"  {field.Name,-3} {string.Join(" | ", cells)}{(vanished > 0 ? $"   ({Counted.Of(vanished, "edge")} {(vanished == 1 ? "vanishes" : "vanish")} in {field.Name})" : "")}");
             }
             o.WriteLine();
         }

@@ -7,18 +7,19 @@ using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
 
-/// <summary><c>flowcert draw GRAPH [--cert CERT] --out FILE.svg|FILE.dot</c>: a picture of a graph, its flow or its blocked set.</summary>
+/// <summary><c>flowcert draw GRAPH [CERT] --out FILE.svg|FILE.dot</c>: a picture of a graph, its flow or its blocked set.</summary>
 public static class DrawCommand
 {
     public static Command Create(TextWriter stdout)
     {
         var graph = new PathArgument("GRAPH") { Description = "the graph: .ograph, .g6, .s6, .mtx or .json" };
-        var cert = new PathOption("--cert") { Description = "a certificate of this graph: draw its rounds and corrections, or its blocked set" };
+        var certArgument = CertificateArgument.Positional("a certificate of this graph: draw its rounds and corrections, or its blocked set");
+        var cert = CertificateArgument.Option();
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
         var output = new PathOption("--out") { Description = "the picture to write: .svg, or .dot for Graphviz", Required = true };
-        var cmd = new Command("draw", "Draw a graph, and with a certificate its flow or proof of absence, as SVG or DOT") { graph, cert, inputs, outputs, output };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(cert), p.GetValue(inputs), p.GetValue(outputs), p.GetValue(output)!, stdout));
+        var cmd = new Command("draw", "Draw a graph, and with a certificate its flow or proof of absence, as SVG or DOT") { graph, certArgument, cert, inputs, outputs, output };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!, CertificateArgument.Resolve(p.GetValue(certArgument), p.GetValue(cert)), p.GetValue(inputs), p.GetValue(outputs), p.GetValue(output)!, stdout));
         return cmd;
     }
 

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using FlowCert.Graphs.Families;
+using FlowCert.Graphs;
 using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
@@ -49,7 +50,7 @@ public static class GenerateCommand
         var format = GraphFiles.FormatOf(outPath);
         var g = FamilyGenerator.Generate(request);
         SafeFile.WriteAllText(outPath, GraphFiles.Write(g, format));
-        stdout.WriteLine($"wrote {Escaped.Of(outPath)}: {request.Family} {request.Size}, {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs" + ConvertCommand.TerminalsNote(g, format));
+        stdout.WriteLine($"wrote {Escaped.Of(outPath)}: {request.Family} {request.Size}, {Counted.Of(g.NodeCount, "node")}, {Counted.Of(g.Edges.Count, "edge")}, {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}" + ConvertCommand.TerminalsNote(g, format));
         return ExitCode.Flow;
     }
 }

@@ -10,10 +10,10 @@ using FlowCert.Simulation;
 namespace FlowCert.Cli;
 
 /// <summary>
-/// <c>flowcert simulate GRAPH --cert CERT [--inputs NAMES] [--outputs NAMES] [--dim P] [--seed N] [--branches all|K]
+/// <c>flowcert simulate GRAPH CERT [--inputs NAMES] [--outputs NAMES] [--field P] [--seed N] [--branches all|K]
 /// [--angles FILE] [--map] [--expect FILE] [--out FILE]</c>: runs the certificate's pattern on a state vector
 /// and says whether every outcome branch implements the same map; prints or writes that map, or checks it
-/// against a claimed matrix.
+/// against a claimed matrix. <c>--cert CERT</c> and <c>--dim P</c> are the older spellings.
 /// </summary>
 public static class SimulateCommand
 {
@@ -22,8 +22,9 @@ public static class SimulateCommand
         var graph = new PathArgument("GRAPH") { Description = "the open graph the certificate is about: .ograph, .g6, .s6, .mtx or .json" };
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
-        var cert = new PathOption("--cert") { Description = "a flow certificate over F_p (JSON)", Required = true };
-        var dim = new Option<string?>("--dim") { Description = "qudit dimension, a prime; must equal the certificate's prime (the default)" };
+        var certArgument = CertificateArgument.Positional("a flow certificate over F_p (JSON)");
+        var cert = CertificateArgument.Option();
+        var dim = new Option<string?>("--field", "--dim") { Description = "qudit dimension, a prime; must equal the certificate's prime (the default; --dim is the older spelling)" };
         var seed = new SeedOption("seed of the random angles, input state and sampled branches", 1);
         var branches = new Option<string>("--branches") { Description = "all (every outcome string) or K (K random ones plus the all-zero one)", DefaultValueFactory = _ => "all" };
         var angles = new PathOption("--angles") { Description = "measurement parameters, NODE VALUE lines (docs/circuits.md); unlisted nodes 0. Without it, random angles unless --map or --expect" };
@@ -31,8 +32,10 @@ public static class SimulateCommand
         var expect = new PathOption("--expect") { Description = "a claimed matrix (JSON); exit 0 when every branch implements it up to a global phase, 1 otherwise" };
         var output = new PathOption("--out") { Description = "with --map: write the map as JSON to this file" };
         var cmd = new Command("simulate", "Simulate the pattern of a flow certificate over qudits; exit 0 deterministic (and as claimed), 1 outcome-dependent (or not as claimed), 2 bad input")
-            { graph, cert, inputs, outputs, dim, seed, branches, angles, map, expect, output };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(cert)!, p.GetValue(dim), p.GetValue(seed), p.GetValue(branches)!, stdout, stderr,
+            { graph, certArgument, cert, inputs, outputs, dim, seed, branches, angles, map, expect, output };
+        cmd.SetAction(p => Execute(p.GetValue(graph)!,
+            CertificateArgument.Resolve(p.GetValue(certArgument), p.GetValue(cert)) ?? throw new UserInputException("simulate needs a certificate: flowcert simulate GRAPH CERT"),
+            p.GetResult(dim) is { } given ? $"{given.IdentifierToken?.Value ?? "--field"} {p.GetValue(dim)}" : null, p.GetValue(seed), p.GetValue(branches)!, stdout, stderr,
             p.GetValue(inputs), p.GetValue(outputs), new MapRequest(p.GetValue(angles), p.GetValue(map), p.GetValue(expect), p.GetValue(output))));
         return cmd;
     }
@@ -53,7 +56,7 @@ public static class SimulateCommand
         request ??= new MapRequest();
         if (request.Out is not null && !request.Map) throw new UserInputException("--out writes the map: give --map with it");
         var selection = ParseBranches(branchText, seed);
-        ulong? dim = dimText is null ? null : ParseDimension(dimText);
+        ulong? dim = dimText is null ? null : ParseDimension(dimText);   // "--field P" or "--dim P", as typed
         var graph = GraphInput.Read(graphPath, inputs, outputs);
         var result = ScheduleCommand.Read(certPath);
         if (CanonicalForm.Sha256(graph) != CanonicalForm.Sha256(result.Graph))
@@ -122,13 +125,14 @@ public static class SimulateCommand
     }
 
     /// <summary>A qudit dimension is a prime, parsed as every command parses a field (FieldSpec.Parse).</summary>
-    private static ulong ParseDimension(string text)
+    private static ulong ParseDimension(string given)
     {
+        var text = given[(given.IndexOf(' ') + 1)..];
         FieldSpec spec;
         try { spec = FieldSpec.Parse(text); }
-        catch (FieldSpecException e) { throw new UserInputException($"--dim {text}: {e.Message}"); }
+        catch (FieldSpecException e) { throw new UserInputException($"{given}: {e.Message}"); }
         if (spec.IsRationals)
-            throw new UserInputException($"--dim {text}: a qudit dimension is a prime; Q is the continuous-variable case, which no state vector can hold.");
+            throw new UserInputException($"{given}: a qudit dimension is a prime; Q is the continuous-variable case, which no state vector can hold.");
         return spec.Prime;
     }
 
@@ -149,11 +153,11 @@ public static class SimulateCommand
     {
         static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;
-        o.WriteLine($"pattern      {Escaped.Of(graphPath)} with {Escaped.Of(certPath)}: {field}, {r.MeasuredNodes} measured node(s), {g.Outputs.Count} output(s)");
+        o.WriteLine($"pattern      {Escaped.Of(graphPath)} with {Escaped.Of(certPath)}: {field}, {Counted.Of(r.MeasuredNodes, "measured node")}, {Counted.Of(g.Outputs.Count, "output")}");
         o.WriteLine($"state        dimension {r.Dimension}: {r.Qudits} qudits, at most {r.PeakLive} live at once + {r.ReferenceQudits} reference = {r.Amplitudes} amplitudes at the peak");
         o.WriteLine(given is null ? $"randomness   seed {seed}: a random diagonal unitary D per measured node, one random input state"
             : request.Angles is null ? $"angles       0 on every measured node (D = 1, the default of --map and --expect); seed {seed}: one random input state"
-            : $"angles       {Escaped.Of(request.Angles)}: {given.Phases.Count} node(s), the others 0; seed {seed}: one random input state");
+            : $"angles       {Escaped.Of(request.Angles)}: {Counted.Of(given.Phases.Count, "node")}, the others 0; seed {seed}: one random input state");
         o.WriteLine(r.Exhaustive
             ? $"branches     {r.BranchesCompared} of {r.TotalBranches:0} (every outcome string)"
             : $"branches     {r.BranchesCompared} of {r.TotalBranches:0} ({selection.SampleSize} sampled, duplicates merged, plus the all-zero one)");

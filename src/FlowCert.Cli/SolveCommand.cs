@@ -9,7 +9,7 @@ using Newtonsoft.Json;
 
 namespace FlowCert.Cli;
 
-/// <summary><c>flowcert solve GRAPH [--field Q|P] [--flow general|causal] [--out CERT] [--json]</c>.</summary>
+/// <summary><c>flowcert solve GRAPH [--field Q|P] [--flow general|causal] [--out CERT] [--format text|json]</c> (<c>--json</c> is the older spelling of <c>--format json</c>).</summary>
 public static class SolveCommand
 {
     public static Command Create(TextWriter stdout)
@@ -20,11 +20,16 @@ public static class SolveCommand
         var field = new Option<string>("--field") { Description = "Q (rationals, continuous variables) or a prime p (qudits of dimension p)", DefaultValueFactory = _ => "Q" };
         var flow = new Option<string>("--flow") { Description = "general or causal", DefaultValueFactory = _ => "general" };
         var output = new PathOption("--out") { Description = "write the certificate (JSON) to this file" };
-        var json = new Option<bool>("--json") { Description = "print one JSON object instead of the summary" };
-        var quiet = new Option<bool>("--quiet") { Description = "no progress line on a terminal (none is shown with --json or when standard error is not a terminal)" };
-        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, json, inputs, outputs, quiet };
-        cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs),
-            p.GetValue(quiet) || p.GetValue(json) || Console.IsErrorRedirected ? null : Console.Error));
+        var format = new Option<string>("--format") { Description = "text (the summary) or json (one JSON object)", DefaultValueFactory = _ => "text" };
+        var json = new Option<bool>("--json") { Description = "the same as --format json (the older spelling)" };
+        var quiet = new Option<bool>("--quiet") { Description = "no progress line on a terminal (none is shown with --format json or when standard error is not a terminal)" };
+        var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, format, json, inputs, outputs, quiet };
+        cmd.SetAction(p =>
+        {
+            var asJson = OutputFormat.IsJson(p.GetValue(format)!, p.GetValue(json));
+            return Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), asJson, stdout, p.GetValue(inputs), p.GetValue(outputs),
+                p.GetValue(quiet) || asJson || Console.IsErrorRedirected ? null : Console.Error);
+        });
         return cmd;
     }
 

@@ -1,3 +1,4 @@
+using FlowCert.Graphs.Formats;
 using FlowCert.Certificates;
 using FlowCert.Flows;
 using FlowCert.Graphs;
@@ -14,18 +15,18 @@ public static class Summary
         var g = r.Graph;
         string Names(IEnumerable<int> nodes)
         {
-            var list = nodes.ToList();
+            var list = nodes.OrderBy(v => g.Names[v], NaturalNameOrder.Instance).ToList();
             var shown = string.Join(" ", list.Take(MaxNodesShown).Select(v => g.Names[v]));
             return list.Count > MaxNodesShown ? $"{shown} ... ({list.Count} nodes)" : shown;
         }
-        o.WriteLine($"graph     {Escaped.Of(source)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs, {g.NodeCount - g.Outputs.Count} measured");
+        o.WriteLine($"graph     {Escaped.Of(source)}: {Counted.Of(g.NodeCount, "node")}, {Counted.Of(g.Edges.Count, "edge")}, {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}, {g.NodeCount - g.Outputs.Count} measured");
         o.WriteLine($"field     {r.Field.Name}    flow: {FlowKinds.Name(r.Kind)}");
         if (r.VanishedEdges.Count > 0)
             Terminal.Warn($"{source}: {VanishingEdges.Warning(g, r.Field, r.VanishedEdges)}");
         if (r.Obstruction is { } blocked)
         {
-            o.WriteLine($"verdict   NO FLOW: blocked set of {blocked.Nodes.Count} node(s): {Names(blocked.Nodes)}");
-            if (r.Kind == FlowKind.General) o.WriteLine($"          {blocked.Witnesses.Count} left-kernel witness(es) prove no node of it can be corrected");
+            o.WriteLine($"verdict   NO FLOW: blocked set of {Counted.Of(blocked.Nodes.Count, "node")}: {Names(blocked.Nodes)}");
+            if (r.Kind == FlowKind.General) o.WriteLine($"          {Counted.Of(blocked.Witnesses.Count, "left-kernel witness", "left-kernel witnesses")} {(blocked.Witnesses.Count == 1 ? "proves" : "prove")} no node of it can be corrected");
             else o.WriteLine("          every possible corrector touches zero or at least two of its nodes");
         }
         else

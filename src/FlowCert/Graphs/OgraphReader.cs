@@ -217,7 +217,9 @@ public static partial class OgraphReader
             if (weightLookup.TryGetValue(span, out var cached)) return cached;
             var s = span.ToString();
             if (!Rational.TryParse(s, out var w))
-                throw Error(3, $"bad weight '{Formats.Excerpt.Of(s)}': write an integer, a/b or a decimal such as 0.25");
+                throw Error(3, Formats.ExactDecimal.ExponentTooLarge(s)
+                    ? $"bad weight '{Formats.Excerpt.Of(s)}': its exponent is beyond ±{Formats.ExactDecimal.MaxExponent}; weights are exact, so such a number would have thousands of digits"
+                    : $"bad weight '{Formats.Excerpt.Of(s)}': write an integer, a/b or a decimal such as 0.25");
             if (w.IsZero) throw Error(3, $"weight of edge {names[u]} {names[v]} is zero: leave the edge out instead");
             if (weightCache.Count < WeightCacheLimit) weightCache[s] = w;
             return w;

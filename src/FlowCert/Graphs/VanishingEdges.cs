@@ -27,7 +27,7 @@ public static class VanishingEdges
         return string.Join(", ", edges.Count > MaxListed ? shown.Append($"... ({edges.Count} in all)") : shown);
     }
 
-    /// <summary>The sentence every command prints: <c>N edge(s) have weight 0 in F and vanish: ...</c>.</summary>
+    /// <summary>The sentence every command prints: <c>N edges have weight 0 in F and vanish: ...</c> (<c>1 edge has ... and vanishes</c>).</summary>
     public static string Warning(OpenGraph g, FieldSpec field, IReadOnlyList<WeightedEdge> edges)
-        => $"{edges.Count} edge(s) have weight 0 in {field.Name} and vanish: {Describe(g, edges)}";
+        => $"{Formats.Counted.Of(edges.Count, "edge")} {(edges.Count == 1 ? "has" : "have")} weight 0 in {field.Name} and {(edges.Count == 1 ? "vanishes" : "vanish")}: {Describe(g, edges)}";
 }

@@ -24,7 +24,7 @@ public static class ScheduleBuilder
             var s = CorrectionSystem<T, TField>.Create(r, f);
             var problems = FlowConditionCheck.Violations(s);
             if (problems.Count > 0)
-                throw new ScheduleException($"the corrections are not a flow ({problems.Count} violation(s) of flows.md section 3): " +
+                throw new ScheduleException($"the corrections are not a flow ({Graphs.Formats.Counted.Of(problems.Count, "violation")} of flows.md section 3): " +
                     string.Join("; ", problems.Take(5)) + (problems.Count > 5 ? "; ..." : ""));
             var g = r.Graph;
 

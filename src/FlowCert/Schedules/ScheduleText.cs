@@ -1,5 +1,6 @@
 using FlowCert.Flows;
 using System.Text;
+using FlowCert.Graphs.Formats;
 using FlowCert.Certificates;
 using FlowCert.Graphs;
 
@@ -34,8 +35,8 @@ public static class ScheduleText
         void Line(string text = "") => o.Append(text).Append('\n');
         string When(NodeFrame fr) => fr.IsOutput ? "output" : $"round {fr.Round}";
 
-        Line($"feed-forward schedule: field {s.Field.Name}, {FlowKinds.Name(s.Kind)} flow, depth {st.Depth}; " +
-             $"{g.NodeCount} nodes: {g.Inputs.Count} input(s), {g.Outputs.Count} output(s), {g.NodeCount - g.Outputs.Count} measured");
+        Line($"feed-forward schedule: field {s.Field.Name}, {FlowKinds.Adjective(s.Kind)} flow, depth {st.Depth}; " +
+             $"{Counted.Of(g.NodeCount, "node")}: {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}, {g.NodeCount - g.Outputs.Count} measured");
         if (s.VanishedEdges.Count > 0) Line("warning: " + VanishingEdges.Warning(g, s.Field, s.VanishedEdges));
         Line($"m_v = outcome of v re-read through its frame (raw outcome - b_v); all arithmetic exact, in {s.Field.Name}");
         Line();

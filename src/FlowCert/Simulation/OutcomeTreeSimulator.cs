@@ -48,9 +48,10 @@ public static class OutcomeTreeSimulator
 
     /// <summary>
     /// The measurement basis, in one place: the bra of raw outcome <paramref name="raw"/> when node v is
-    /// measured under X-frame a, that is &lt;b_raw| for D' = X^a D X^-a (flows.md section 7).
+    /// measured under frame X^a Z^b; for an XY-type measurement that is &lt;b_raw| for D' = X^a D X^-a
+    /// (flows.md section 7), which needs a only (b re-reads the outcome afterwards).
     /// </summary>
-    internal static Complex[] MeasurementBra(QuditPattern pattern, FrameFault faults, int v, int a, int raw)
+    internal static Complex[] MeasurementBra(QuditPattern pattern, FrameFault faults, int v, int a, int b, int raw)
     {
         int shift = faults.HasFlag(FrameFault.SkipAngleAdaptation) ? 0 : faults.HasFlag(FrameFault.FlipAngleAdaptation) ? -a : a;
         var adapted = QuditOperators.AdaptedAngle(pattern.Angles[v], shift);
@@ -71,7 +72,7 @@ public static class OutcomeTreeSimulator
             IEnumerable<int> outcomes = sample is null ? Enumerable.Range(0, p) : sample.Select(s => s[level]).Distinct().Order();
             foreach (var raw in outcomes)
             {
-                var child = register.Project(v, MeasurementBra(P, Faults, v, A[v], raw));
+                var child = register.Project(v, MeasurementBra(P, Faults, v, A[v], B[v], raw));
                 int m = Mod(Faults.HasFlag(FrameFault.FlipReadout) ? raw + B[v] : raw - B[v]);
                 int sign = Faults.HasFlag(FrameFault.FlipCorrectionSign) ? -1 : 1;
                 var next = this with { A = (int[])A.Clone(), B = (int[])B.Clone(), Raw = (int[])Raw.Clone(), Outcome = (int[])Outcome.Clone(), UsedA = (int[])UsedA.Clone(), UsedB = (int[])UsedB.Clone() };

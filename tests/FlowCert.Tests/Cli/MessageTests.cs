@@ -44,6 +44,18 @@ public class MessageTests
     }
 
     [Fact]
+    public void AnExponentTooLargeToHoldExactlyIsNamedAsTheReason()
+    {
+        using var w = new Workspace();
+        var run = Flowcert.InProcess("solve", w.Write("e.ograph", "input a\noutput b\nedge a b 1e999999999\n"));
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("e.ograph:3:10: bad weight '1e999999999': its exponent is beyond ±4000", run.Stderr);
+        var mtx = Flowcert.InProcess("solve", w.Write("a.mtx", "%%MatrixMarket matrix coordinate real symmetric\n2 2 1\n2 1 1e5000\n"));
+        Assert.Equal(2, mtx.ExitCode);
+        Assert.Contains("a.mtx:3:5: bad real value '1e5000': its exponent is beyond ±4000", mtx.Stderr);
+    }
+
+    [Fact]
     public void ControlCharactersFromTheInputAreEscapedInEveryMessage()
     {
         using var w = new Workspace();

@@ -166,7 +166,7 @@ public class SimulateCommandTests
         // The patch's rung r0c2-r1c2 has weight 3, which is 0 in F3 (flows.md section 1: never silently).
         var (code, o, e) = Run("simulate", Corpus("qutrit-patch.ograph"), "--cert", Corpus("qutrit-patch.F3.general.json"), "--branches", "3");
         Assert.Equal(0, code);
-        Assert.Equal($"flowcert: warning: {Corpus("qutrit-patch.F3.general.json")}: 1 edge(s) have weight 0 in F3 and vanish: r0c2-r1c2 (3)\n", e);
+        Assert.Equal($"flowcert: warning: {Corpus("qutrit-patch.F3.general.json")}: 1 edge has weight 0 in F3 and vanishes: r0c2-r1c2 (3)\n", e);
         Assert.DoesNotContain("vanish", o);
         // The splitter pair's weights 1 and -1 never vanish: nothing on standard error.
         Assert.Equal("", Run("simulate", Corpus("splitter-pair.ograph"), "--cert", Corpus("splitter-pair.F3.general.json")).Err);

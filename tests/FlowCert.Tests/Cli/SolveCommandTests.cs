@@ -243,7 +243,7 @@ public class SolveCommandTests
         var graph = w.Write("wire.ograph", Designs.Wire);
         var run = Flowcert.InProcess("solve", graph, "--field", "2");
         Assert.DoesNotContain("warning", run.Stdout);
-        Assert.Equal($"flowcert: warning: {graph}: 1 edge(s) have weight 0 in F2 and vanish: b-c (2)\n", run.Stderr.ReplaceLineEndings("\n"));
+        Assert.Equal($"flowcert: warning: {graph}: 1 edge has weight 0 in F2 and vanishes: b-c (2)\n", run.Stderr.ReplaceLineEndings("\n"));
         // Without b - c the wire falls apart: b cannot be corrected (flows.md section 6).
         Assert.Equal(1, run.ExitCode);
         var clean = Flowcert.InProcess("solve", graph, "--field", "5");
@@ -253,7 +253,7 @@ public class SolveCommandTests
         var several = w.Write("several.ograph", "input a\noutput e\nedge a b 0.75\nedge b c 3\nedge c d 1\nedge d e 6/5\n");
         var run3 = Flowcert.InProcess("solve", several, "--field", "3");
         // 0.75 = 3/4, 3 and 6/5 all have a numerator divisible by 3; c - d stays.
-        Assert.Contains("3 edge(s) have weight 0 in F3 and vanish: a-b (3/4), b-c (3), d-e (6/5)", run3.Stderr);
+        Assert.Contains("3 edges have weight 0 in F3 and vanish: a-b (3/4), b-c (3), d-e (6/5)", run3.Stderr);
         w.AssertExactly("wire.ograph", "several.ograph");
     }
 
@@ -309,7 +309,7 @@ public class SolveCommandTests
         // Twelve rungs of weight 2, all 0 in F2.
         var graph = w.Write("ladder.ograph", string.Concat(Enumerable.Range(0, 12).Select(i => $"edge n{i:00} m{i:00} 2\n")));
         var line = Flowcert.InProcess("solve", graph, "--field", "2").Stderr.Split('\n').Single(l => l.StartsWith("flowcert: warning: ") && l.Contains("vanish"));
-        Assert.Contains("12 edge(s) have weight 0 in F2 and vanish: m00-n00 (2), ", line);
+        Assert.Contains("12 edges have weight 0 in F2 and vanish: m00-n00 (2), ", line);
         Assert.EndsWith(", ... (12 in all)", line);
         Assert.Equal(10, line.Split(", ").Count(part => part.EndsWith("(2)")));
     }

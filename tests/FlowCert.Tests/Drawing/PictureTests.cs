@@ -63,7 +63,7 @@ public class PictureTests
     public void EdgesThatVanishInTheCertificatesFieldAreNotedInTheLegend()
     {
         // The patch's rung r0c2-r1c2 has weight 3: 0 in F3, not in F5 (flows.md section 1: never silently).
-        const string Note = "1 edge(s) have weight 0 in F3 and vanish: r0c2-r1c2 (3)";
+        const string Note = "1 edge has weight 0 in F3 and vanishes: r0c2-r1c2 (3)";
         var f3 = Solve("qutrit-patch", FieldSpec.PrimeField(3));
         var legend = XDocument.Parse(Draw(f3.Graph, f3)).Descendants(Svg + "g").Single(g => (string?)g.Attribute("id") == "legend");
         Assert.Contains(legend.Descendants(Svg + "text"), t => t.Value == Note);

@@ -9,7 +9,7 @@ namespace FlowCert.Tests.Fuzz;
 /// file formats). Sizes straddle the readers' growth boundaries: the .ograph name table (16, doubling),
 /// its line buffer (256 characters, doubling; names up to 300 characters) and its 64 Ki-character chunks;
 /// graph6 and sparse6 size fields (one character below 63 nodes, four from 63; the six-byte form from
-/// 258,048, formats.txt of nauty) and sparse6's bits per vertex (powers of two).
+/// 258,048, formats.txt of nauty, from memory) and sparse6's bits per vertex (powers of two).
 /// graph6, sparse6 and Matrix Market carry no names or terminals: there the graph read back must be the
 /// original renamed v0, v1, ... (v1, v2, ... for Matrix Market's rows) in natural order of its names, without inputs and outputs.
 /// </summary>

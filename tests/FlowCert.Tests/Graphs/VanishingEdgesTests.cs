@@ -59,7 +59,7 @@ public class VanishingEdgesTests
     {
         var g = Graph();
         var few = VanishingEdges.In(g, FieldSpec.PrimeField(3));
-        Assert.Equal("4 edge(s) have weight 0 in F3 and vanish: a-b (3), b-c (6/5), c-d (-9/2), f-g (-15)", VanishingEdges.Warning(g, FieldSpec.PrimeField(3), few));
+        Assert.Equal("4 edges have weight 0 in F3 and vanish: a-b (3), b-c (6/5), c-d (-9/2), f-g (-15)", VanishingEdges.Warning(g, FieldSpec.PrimeField(3), few));
 
         var ladder = OgraphReader.Parse(string.Concat(Enumerable.Range(0, 12).Select(i => $"edge n{i:00} m{i:00} 2\n")), "ladder.ograph");
         var all = VanishingEdges.In(ladder, FieldSpec.PrimeField(2));

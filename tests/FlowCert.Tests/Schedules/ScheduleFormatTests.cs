@@ -14,7 +14,7 @@ public class ScheduleFormatTests
     {
         // The patch's rung r0c2-r1c2 has weight 3, which is 0 in F3 (flows.md section 1: report it, never silently).
         var s = Patch();
-        Assert.Contains("\nwarning: 1 edge(s) have weight 0 in F3 and vanish: r0c2-r1c2 (3)\n", ScheduleText.Write(s));
+        Assert.Contains("\nwarning: 1 edge has weight 0 in F3 and vanishes: r0c2-r1c2 (3)\n", ScheduleText.Write(s));
         var rows = ScheduleCsv.Write(s).Split('\n').Select(l => l.Split(',')).ToList();
         Assert.Equal([["vanished", "r0c2", "", "r1c2", "3", ""]], rows.Where(r => r[0] == "vanished"));
         var json = JObject.Parse(ScheduleJson.Write(s));

@@ -2,7 +2,7 @@ namespace FlowCert.Graphs.Formats;
 
 /// <summary>
 /// Checks that a text is one JSON value as RFC 8259 ("The JavaScript Object Notation (JSON) Data
-/// Interchange Format", DOI 10.17487/RFC8259) defines it, before Json.NET (which is lenient) reads it:
+/// Interchange Format", DOI 10.17487/RFC8259, identifier from memory) defines it, before Json.NET (which is lenient) reads it:
 /// no single quotes, unquoted keys, trailing commas, comments, NaN or other bare words, no control
 /// characters outside strings (NUL included) or unescaped inside them. The first problem is a
 /// <see cref="GraphFormatException"/> with its line and column. Iterative, so nesting depth costs no stack.

@@ -55,7 +55,7 @@ public class GraphJsonTests
 
 /// <summary>
 /// Only JSON as RFC 8259 ("The JavaScript Object Notation (JSON) Data Interchange Format",
-/// DOI 10.17487/RFC8259) defines it is read, in .json graphs and in certificates; everything Json.NET
+/// DOI 10.17487/RFC8259, identifier from memory) defines it is read, in .json graphs and in certificates; everything Json.NET
 /// would tolerate beyond it is refused with its line and column.
 /// </summary>
 public class StrictJsonTests
