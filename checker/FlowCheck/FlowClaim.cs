@@ -23,7 +23,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress, bool
             var v = g.Measured(key, "corrections");
             (missing, next) = (missing < 0 ? Missing(next, v) : missing, v + 1);
             CheckCorrection(v, json);
-            progress.Report("correction vectors checked", v, g.Count);
+            if (progress.Due) progress.Show($"correction vectors checked up to node {v + 1:N0} of {g.Count:N0}");
         }
         if ((missing < 0 ? Missing(next, g.Count) : missing) is >= 0 and var first) throw new InvalidCertificate($"node {g.Name(first)}: no correction vector");
         return rounds;

@@ -62,17 +62,13 @@ public sealed class Json : IDisposable
 
     long Position => stream.Position - length + pos;
 
-    bool Seek((long Offset, int Line, int Column) at)
-    {
-        (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column);
-        return true;
-    }
+    bool Seek((long Offset, int Line, int Column) at) { (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column); return true; }
 
     int Peek()
     {
         if (pos < length) return buffer[pos];
         (length, pos) = (stream.Read(buffer), 0);
-        progress.Report("bytes read", stream.Position, stream.Length);
+        if (progress.Due) progress.Show($"reading: byte {stream.Position:N0} of {stream.Length:N0}");
         return length > 0 ? buffer[0] : -1;
     }
 

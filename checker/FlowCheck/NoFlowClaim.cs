@@ -52,7 +52,7 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress, bo
             foreach (var w in product.Keys.Order().Where(w => !product[w].Num.IsZero))
                 throw new InvalidCertificate($"{what}: (y^T A)({g.Name(w)}) = {product[w].Show()} for corrector {g.Name(w)}, not 0");
             product.Clear();
-            progress.Report("witnesses checked", i + 1, blocked.Count);
+            if (progress.Due) progress.Show($"witnesses checked: {i + 1:N0} (blocked set of {blocked.Count:N0})");
         }
         foreach (var v in blocked.Where(v => !covered[v]))
             throw new InvalidCertificate($"blocked node {g.Name(v)} is in no witness's support");

@@ -58,12 +58,13 @@ public sealed class Progress(TextWriter? terminal)
     readonly Stopwatch clock = Stopwatch.StartNew();
     long shown = -1;
 
-    public void Report(string what, long done, long total)
+    /// <summary>True when a line is due (a terminal, a second gone, 200 ms since the last one); the caller then calls <see cref="Show"/>.</summary>
+    public bool Due => terminal is not null && clock.ElapsedMilliseconds >= 1000 && clock.ElapsedMilliseconds - shown >= 200;
+
+    public void Show(string what)
     {
-        var now = clock.ElapsedMilliseconds;
-        if (terminal is null || now < 1000 || now - shown < 200) return;
-        shown = now;
-        terminal.Write($"\rflowcheck: {what}: {done:N0} of {total:N0}, {now / 1000.0:F1} s elapsed   ");
+        shown = clock.ElapsedMilliseconds;
+        terminal!.Write($"\r{$"flowcheck: {what}, {shown / 1000.0:F1} s elapsed",-79}");
     }
 
     public void Done() { if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r"); shown = -1; }

@@ -3,6 +3,7 @@ using FlowCert.Certificates;
 using FlowCert.Flows;
 using FlowCert.Flows.Primes;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
 using Newtonsoft.Json;
 
 namespace FlowCert.Cli;
@@ -17,19 +18,19 @@ public static class PrimesReport
 
     /// <summary>Verdict and depth in words: "flow, depth 3" or "no flow (blocked 4 nodes)".</summary>
     public static string Verdict(FlowResult r)
-        => r.HasFlow ? $"flow, depth {r.Depth}" : $"no flow (blocked {r.Obstruction!.Nodes.Count} node{(r.Obstruction.Nodes.Count == 1 ? "" : "s")})";
+        => r.HasFlow ? $"flow, depth {r.Depth}" : $"no flow (blocked {Counted.Of(r.Obstruction!.Nodes.Count, "node")})";
 
     /// <summary>The short human table.</summary>
     public static void WriteTable(TextWriter o, string source, PrimeSurvey s, AuditResult? audit, IReadOnlyList<string> written)
     {
         var g = s.Graph;
         var q = s.Rational;
-        o.WriteLine($"graph     {Escaped.Of(source)}: {g.NodeCount} nodes, {g.Edges.Count} edges, {g.Inputs.Count} inputs, {g.Outputs.Count} outputs");
+        o.WriteLine($"graph     {Escaped.Of(source)}: {Counted.Of(g.NodeCount, "node")}, {Counted.Of(g.Edges.Count, "edge")}, {Counted.Of(g.Inputs.Count, "input")}, {Counted.Of(g.Outputs.Count, "output")}");
         o.WriteLine($"flow      {FlowKinds.Name(s.Kind)}");
         o.WriteLine($"over Q    {Verdict(q)}");
         var origins = s.Kind == FlowKind.Causal ? "weight numerators and denominators (causal flow depends only on which weights vanish)"
             : "weights and the Q run's layer blocks";
-        o.WriteLine($"E         {(s.Exceptional.Count == 0 ? "none" : string.Join(" ", s.Exceptional.Select(a => a.Prime)))}: the prime factors of {s.Integers.Count} integer(s) from {origins}");
+        o.WriteLine($"E         {(s.Exceptional.Count == 0 ? "none" : string.Join(" ", s.Exceptional.Select(a => a.Prime)))}: the prime factors of {Counted.Of(s.Integers.Count, "integer")} from {origins}");
         if (s.Exceptional.Count > 0)
         {
             o.WriteLine();
@@ -61,8 +62,8 @@ public static class PrimesReport
         if (audit is not null)
         {
             o.WriteLine(audit.Disagreements.Count == 0
-                ? $"audit     every prime up to {audit.UpTo} solved directly ({audit.PrimesSolved} primes{(audit.PrimesUnclassified > 0 ? $", {audit.PrimesUnclassified} without a claim" : "")}): all agree with the claim"
-                : $"audit     {audit.Disagreements.Count} DISAGREEMENT(S) up to {audit.UpTo}: a bug in flowcert, please report it with the graph");
+                ? $"audit     every prime up to {audit.UpTo} solved directly ({Counted.Of(audit.PrimesSolved, "prime")}{(audit.PrimesUnclassified > 0 ? $", {audit.PrimesUnclassified} without a claim" : "")}): all agree with the claim"
+                : $"audit     {Counted.Of(audit.Disagreements.Count, "DISAGREEMENT")} up to {audit.UpTo}: a bug in flowcert, please report it with the graph");
             foreach (var d in audit.Disagreements)
                 o.WriteLine($"          p = {d.Claim.Prime}: claimed {ClaimText(d.Claim)}, solved {(d.Direct.Result is { } r ? Verdict(r) : "undefined")}");
         }

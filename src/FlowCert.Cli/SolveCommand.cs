@@ -23,11 +23,11 @@ public static class SolveCommand
         var output = new PathOption("--out") { Description = "write the certificate (JSON) to this file" };
         var format = new Option<string>("--format") { Description = "text (the summary) or json (one JSON object)", DefaultValueFactory = _ => "text" };
         var json = new Option<bool>("--json") { Description = "the same as --format json (the older spelling)" };
-        var quiet = new Option<bool>("--quiet") { Description = "no progress line on a terminal (none is shown with JSON output or when standard error is not a terminal)" };
+        var quiet = new Option<bool>("--quiet") { Description = "no progress line on a terminal (none is shown with --format json or when standard error is not a terminal)" };
         var cmd = new Command("solve", "Find a minimum-depth flow or prove there is none; exit 0 flow, 1 no flow, 2 bad input") { graph, field, flow, output, format, json, inputs, outputs, quiet, labels };
         cmd.SetAction(p =>
         {
-            bool asJson = OutputFormat.IsJson(p.GetValue(format)!, p.GetValue(json));
+            var asJson = OutputFormat.IsJson(p.GetValue(format)!, p.GetValue(json));
             return Execute(p.GetValue(graph)!, p.GetValue(field)!, p.GetValue(flow)!, p.GetValue(output), asJson, stdout, p.GetValue(inputs), p.GetValue(outputs),
                 p.GetValue(quiet) || asJson || Console.IsErrorRedirected ? null : Console.Error, p.GetValue(labels));
         });

@@ -139,3 +139,21 @@ public class JsonReaderTests
         AssertInvalid(CheckText(Wire.Replace("\"version\":1", "\"version\":true")), "invalid: version must be an integer, found boolean");
     }
 }
+
+/// <summary>--quiet: no progress line even when standard error is a terminal (docs/checker.md).</summary>
+public class QuietOptionTests
+{
+    [Fact]
+    public void QuietIsAcceptedAnywhereAndSilencesTheTerminal()
+    {
+        var cert = Write(Examples.WireCausal().ToString(), ".json");
+        foreach (var args in new[] { new[] { cert, "--quiet" }, ["--quiet", cert] })
+        {
+            var (stdout, stderr) = (new StringWriter(), new StringWriter());
+            Assert.Equal(0, Program.Run(args, stdout, stderr, terminal: true));
+            Assert.StartsWith("valid: causal flow over Q, depth 2", stdout.ToString());
+            Assert.Equal("", stderr.ToString());
+        }
+        Assert.Contains("[--quiet]", Program.Usage);
+    }
+}

@@ -11,7 +11,7 @@ namespace FlowCert.Algebra;
 /// rows of a group are reduced among themselves, every combination of them is tabulated once (Gray code
 /// order, one XOR per table entry), and each other row then takes one table lookup and one XOR per group
 /// instead of one XOR per pivot: the Method of Four Russians (as published in "Efficient Multiplication
-/// of Dense Matrices over GF(2)", arXiv:0811.1714; the grouping here is this project's own). Row XORs use
+/// of Dense Matrices over GF(2)", arXiv:0811.1714, from memory; the grouping here is this project's own). Row XORs use
 /// 256-bit vectors.
 /// </summary>
 internal static class BitElimination
@@ -37,11 +37,11 @@ internal static class BitElimination
         var pivots = Rref(a, m, w);
         int k = 0;
         while (k < pivots.Length && pivots[k] < n) k++;
-        var top = new SparseVector<ulong>[k];
         var kernel = new SparseVector<ulong>[m - k];
         var pivotIds = new int[k];
+        for (int r = 0; r < k; r++) pivotIds[r] = ids[pivots[r]];
         var idx = new int[m];
-        for (int r = 0; r < m; r++)
+        for (int r = k; r < m; r++)
         {
             // The set bits of the I part, word by word.
             int count = 0;
@@ -60,11 +60,42 @@ internal static class BitElimination
             }
             var ones = new ulong[count];
             Array.Fill(ones, 1UL);
-            var v = new SparseVector<ulong>(idx.AsSpan(0, count).ToArray(), ones);
-            if (r < k) { top[r] = v; pivotIds[r] = ids[pivots[r]]; }
-            else kernel[r - k] = v;
+            kernel[r - k] = new SparseVector<ulong>(idx.AsSpan(0, count).ToArray(), ones);
         }
-        return new EchelonTransform<ulong>(m, pivotIds, top, kernel);
+        // The I part of rows 0..k-1, transposed (bit a of row r set when entry (a, r) is one), so that the
+        // solution of row r is read off one packed row.
+        int ks = (k + 63) >> 6;
+        var transposed = new ulong[(long)m * ks];
+        for (int row = 0; row < k; row++)
+        {
+            long start = (long)row * s;
+            for (int j = n; j < w;)
+            {
+                ulong word = a[start + (j >> 6)] >> (j & 63);
+                int limit = Math.Min(64 - (j & 63), w - j);
+                if (limit < 64) word &= (1UL << limit) - 1;
+                while (word != 0)
+                {
+                    int r = j + BitOperations.TrailingZeroCount(word) - n;
+                    transposed[(long)r * ks + (row >> 6)] |= 1UL << (row & 63);
+                    word &= word - 1;
+                }
+                j += limit;
+            }
+        }
+        return new EchelonTransform<ulong>(m, pivotIds, r =>
+        {
+            int count = 0;
+            for (int q = 0; q < ks; q++) count += BitOperations.PopCount(transposed[(long)r * ks + q]);
+            var cols = new int[count];
+            int t = 0;
+            for (int q = 0; q < ks; q++)
+                for (ulong word = transposed[(long)r * ks + q]; word != 0; word &= word - 1)
+                    cols[t++] = pivotIds[(q << 6) + BitOperations.TrailingZeroCount(word)];
+            var ones = new ulong[count];
+            Array.Fill(ones, 1UL);
+            return new SparseVector<ulong>(cols, ones);
+        }, kernel);
     }
 
     private static void Set(ulong[] a, long rowStart, int k) => a[rowStart + (k >> 6)] |= 1UL << (k & 63);
@@ -113,12 +144,7 @@ internal static class BitElimination
             {
                 int size = 1 << g;
                 var src = Row(a, first + g, s, from);
-                for (int t = 0; t < size; t++)
-                {
-                    var dst = table.AsSpan((size + t) * len, len);
-                    table.AsSpan(t * len, len).CopyTo(dst);
-                    Xor(dst, src);
-                }
+                for (int t = 0; t < size; t++) XorInto(table.AsSpan((size + t) * len, len), table.AsSpan(t * len, len), src);
             }
             // Every other row: its bits in the group's columns pick the combination that clears them.
             for (int i = 0; i < m; i++)
@@ -136,6 +162,22 @@ internal static class BitElimination
 
     private static Span<ulong> Row(ulong[] a, int i, int s, int fromWord)
         => a.AsSpan((int)((long)i * s + fromWord), s - fromWord);
+
+    /// <summary>target = x XOR y (target does not overlap x or y).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static void XorInto(Span<ulong> target, ReadOnlySpan<ulong> x, ReadOnlySpan<ulong> y)
+    {
+        int j = 0;
+        if (Vector256.IsHardwareAccelerated)
+        {
+            ref var t0 = ref MemoryMarshal.GetReference(target);
+            ref var x0 = ref MemoryMarshal.GetReference(x);
+            ref var y0 = ref MemoryMarshal.GetReference(y);
+            for (; j + 4 <= target.Length; j += 4)
+                (Vector256.LoadUnsafe(ref x0, (nuint)j) ^ Vector256.LoadUnsafe(ref y0, (nuint)j)).StoreUnsafe(ref t0, (nuint)j);
+        }
+        for (; j < target.Length; j++) target[j] = x[j] ^ y[j];
+    }
 
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
     private static void Xor(Span<ulong> target, ReadOnlySpan<ulong> source)

@@ -12,16 +12,41 @@ internal sealed class EchelonTransform<T> : IEliminationResult<T> where T : stru
 {
     private readonly int m;
     private readonly int[] pivotColumnIds;
-    private readonly SparseVector<T>[] solutionRows;
+    private readonly Func<int, SparseVector<T>> solution;
     private readonly SparseVector<T>[] kernel;
 
-    /// <summary>Wraps the I part of [B | I] in echelon form: rows 0..k-1 (pivots on columns of B, with their ids) and rows k..m-1.</summary>
-    public EchelonTransform(int m, int[] pivotColumnIds, SparseVector<T>[] solutionRows, SparseVector<T>[] kernel)
+    /// <summary>Entry (a, r) of the I part of the reduced [B | I], for a row a below the rank: false when it is zero.</summary>
+    public delegate bool EntryReader(int a, int r, out T value);
+
+    /// <summary>
+    /// Wraps the reduced [B | I]: the pivot column ids of rows 0..k-1, the solution for a row r (column r of
+    /// their I part, keyed by pivot column id; asked only for rows outside the kernel's support), and rows
+    /// k..m-1 (the left kernel).
+    /// </summary>
+    public EchelonTransform(int m, int[] pivotColumnIds, Func<int, SparseVector<T>> solution, SparseVector<T>[] kernel)
     {
         this.m = m;
         this.pivotColumnIds = pivotColumnIds;
-        this.solutionRows = solutionRows;
+        this.solution = solution;
         this.kernel = kernel;
+    }
+
+    /// <summary>Wraps the reduced [B | I] given a reader of the I part of rows 0..k-1 (solutions read column by column).</summary>
+    public EchelonTransform(int m, int[] pivotColumnIds, EntryReader entry, SparseVector<T>[] kernel)
+        : this(m, pivotColumnIds, ColumnReader(pivotColumnIds, entry), kernel) { }
+
+    private static Func<int, SparseVector<T>> ColumnReader(int[] pivotColumnIds, EntryReader entry)
+    {
+        int k = pivotColumnIds.Length;
+        var cols = new int[k];
+        var vals = new T[k];
+        return r =>
+        {
+            int count = 0;
+            for (int a = 0; a < k; a++)
+                if (entry(a, r, out var v)) { cols[count] = pivotColumnIds[a]; vals[count++] = v; }
+            return new SparseVector<T>(cols[..count], vals[..count]);
+        };
     }
 
     /// <summary>
@@ -78,25 +103,9 @@ internal sealed class EchelonTransform<T> : IEliminationResult<T> where T : stru
     {
         var blocked = new bool[m];
         foreach (var y in kernel) foreach (var r in y.Indices) blocked[r] = true;
-        // Row a of the solution rows holds entry a of every solution: count, then fill in pivot order.
-        var count = new int[m];
-        foreach (var t in solutionRows) foreach (var r in t.Indices) count[r]++;
-        var cols = new int[m][];
-        var vals = new T[m][];
-        for (int r = 0; r < m; r++) if (!blocked[r]) { cols[r] = new int[count[r]]; vals[r] = new T[count[r]]; count[r] = 0; }
-        for (int a = 0; a < solutionRows.Length; a++)
-        {
-            var t = solutionRows[a];
-            for (int q = 0; q < t.Count; q++)
-            {
-                int r = t.Indices[q];
-                if (blocked[r]) continue;
-                cols[r][count[r]] = pivotColumnIds[a];
-                vals[r][count[r]++] = t.Values[q];
-            }
-        }
+        // Column r of the I part, rows 0..k-1, is the solution of B c = e_r on the pivot columns.
         var result = new Dictionary<int, SparseVector<T>>();
-        for (int r = 0; r < m; r++) if (!blocked[r]) result[r] = new SparseVector<T>(cols[r], vals[r]);
+        for (int r = 0; r < m; r++) if (!blocked[r]) result[r] = solution(r);
         return result;
     }
 }

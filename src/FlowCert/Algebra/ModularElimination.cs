@@ -41,10 +41,8 @@ internal static class ModularElimination
     {
         int w = n + m, k = 0;
         while (k < m && pivots[k] < n) k++;
-        var top = new SparseVector<ulong>[k];
         var kernel = new SparseVector<ulong>[m - k];
-        var pivotIds = new int[k];
-        for (int r = 0; r < m; r++)
+        for (int r = k; r < m; r++)
         {
             var part = a.AsSpan((int)((long)r * w + n), m);
             int count = 0;
@@ -52,10 +50,11 @@ internal static class ModularElimination
             var idx = new int[count];
             var val = new ulong[count];
             for (int j = 0, t = 0; j < m; j++) if (part[j] != 0) { idx[t] = j; val[t++] = part[j]; }
-            if (r < k) { top[r] = new SparseVector<ulong>(idx, val); pivotIds[r] = ids[pivots[r]]; }
-            else kernel[r - k] = new SparseVector<ulong>(idx, val);
+            kernel[r - k] = new SparseVector<ulong>(idx, val);
         }
-        return new EchelonTransform<ulong>(m, pivotIds, top, kernel);
+        var pivotIds = new int[k];
+        for (int r = 0; r < k; r++) pivotIds[r] = ids[pivots[r]];
+        return new EchelonTransform<ulong>(m, pivotIds, (int row, int col, out ulong v) => (v = a[(long)row * w + n + col]) != 0, kernel);
     }
 
     /// <summary>

@@ -116,20 +116,24 @@ internal static class MultiModularElimination
         var pivots = profile!;
         int k = 0;
         while (k < m && pivots[k] < n) k++;
-        var top = new SparseVector<Rational>[k];
         var kernel = new SparseVector<Rational>[m - k];
         var pivotIds = new int[k];
-        for (int r = 0; r < m; r++)
+        for (int r = 0; r < k; r++) pivotIds[r] = ids[pivots[r]];
+        for (int r = k; r < m; r++)
         {
             var idx = new List<int>();
             var val = new List<Rational>();
             for (int j = 0; j < m; j++)
                 if (!num[r][n + j].IsZero) { idx.Add(j); val.Add(Rational.Create(num[r][n + j], den[r])); }
-            var v = new SparseVector<Rational>(idx.ToArray(), val.ToArray());
-            if (r < k) { top[r] = v; pivotIds[r] = ids[pivots[r]]; }
-            else kernel[r - k] = v;
+            kernel[r - k] = new SparseVector<Rational>(idx.ToArray(), val.ToArray());
         }
-        return new EchelonTransform<Rational>(m, pivotIds, top, kernel);
+        var numerators = num;
+        return new EchelonTransform<Rational>(m, pivotIds, (int row, int col, out Rational v) =>
+        {
+            var x = numerators[row][n + col];
+            v = x.IsZero ? Rational.Zero : Rational.Create(x, den[row]);
+            return !x.IsZero;
+        }, kernel);
     }
 
     private static int Compare(int[] a, int[] b)

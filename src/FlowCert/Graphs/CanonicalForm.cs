@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Security.Cryptography;
 using System.Text;
 
@@ -35,8 +36,13 @@ public static class CanonicalForm
         }
     }
 
+    // A graph is immutable, so its hash is computed once (solve --json and the certificate both need it).
+    private static readonly ConditionalWeakTable<OpenGraph, string> Hashes = new();
+
     /// <summary>Lowercase hex SHA-256 of the UTF-8 canonical text, hashed as it is written (the text is never held whole).</summary>
-    public static string Sha256(OpenGraph g)
+    public static string Sha256(OpenGraph g) => Hashes.GetValue(g, Compute);
+
+    private static string Compute(OpenGraph g)
     {
         using var sha = SHA256.Create();
         using (var hashing = new CryptoStream(Stream.Null, sha, CryptoStreamMode.Write, leaveOpen: true))

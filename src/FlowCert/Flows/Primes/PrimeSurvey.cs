@@ -49,7 +49,10 @@ public sealed class PrimeSurvey
             for (int k = 0; k < run.Blocks.Count; k++)
             {
                 var (minor, unsolvable) = run.Blocks[k];
-                raw.Add((IntegerOrigin.PivotMinor, k + 1, $"layer {k + 1} block", minor));
+                // The rank matters only where some row is solvable (docs/primes.md, Lemma 3): not at the step
+                // that finds nothing, where Lemma 4 alone keeps every row unsolvable.
+                if (k < run.Layers.Count)
+                    raw.Add((IntegerOrigin.PivotMinor, k + 1, $"layer {k + 1} block", minor));
                 foreach (var (node, gcd) in unsolvable)
                     raw.Add((IntegerOrigin.KernelCoordinate, k + 1, $"layer {k + 1} row {graph.Names[node]}", gcd));
             }
@@ -73,7 +76,8 @@ public sealed class PrimeSurvey
             foreach (var p in f.ProbablePrimes)
                 unclassified.TryAdd(p, "a probable prime (Baillie-PSW) of 2^64 or more: beyond the solver's F_p arithmetic, so not solved");
             foreach (var c in f.Unfactored)
-                unclassified.TryAdd(c, $"composite, not factored within the {budget.Limit.TotalSeconds:0.###} s budget: primes dividing it are not classified");
+                unclassified.TryAdd(c, string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"composite, not factored within the {budget.Limit.TotalSeconds:0.###} s budget: primes dividing it are not classified"));
         }
         return new PrimeSurvey
         {

@@ -18,7 +18,7 @@ internal sealed class RationalLayerRun
     public List<int[]> Layers { get; } = [];
     /// <summary>The unprocessed nodes when the run stopped (empty when a flow exists).</summary>
     public int[] Blocked { get; private set; } = [];
-    /// <summary>Per layer (including the final stuck one): the pivot minor, and (row node, gcd) for rows unsolvable over Q.</summary>
+    /// <summary>Per step (including the final stuck one): the gcd of two non-zero r x r minors, and (row node, gcd over two kernel bases) for rows unsolvable over Q.</summary>
     public List<(BigInteger PivotMinor, List<(int Node, BigInteger Gcd)> Unsolvable)> Blocks { get; } = [];
 
     public RationalLayerRun(OpenGraph g)
@@ -54,15 +54,23 @@ internal sealed class RationalLayerRun
                 block[r] = new BigInteger[columns.Length];
                 foreach (var (node, w) in entries) block[r][columnOf[node]] = w.Numerator * (scale / w.Denominator);
             }
+            // Two eliminations, the second with rows and columns in opposite order, give two non-zero r x r
+            // minors and two integral kernel bases; the gcds over both are still valid (docs/primes.md) and
+            // drop most primes that only one pivot choice happens to pick up.
             var elimination = new FractionFreeElimination(block, columns.Length);
+            var reversed = new FractionFreeElimination(
+                block.Reverse().Select(row => row.Reverse().ToArray()).ToArray(), columns.Length);
             var layer = new List<int>();
             var unsolvable = new List<(int, BigInteger)>();
             for (int r = 0; r < rows.Length; r++)
             {
+                int mirror = rows.Length - 1 - r;
+                if (elimination.IsSolvable(r) != reversed.IsSolvable(mirror))
+                    throw new InvalidOperationException("internal error: two eliminations of one block disagree on a row's solvability");
                 if (elimination.IsSolvable(r)) layer.Add(rows[r]);
-                else unsolvable.Add((rows[r], elimination.KernelCoordinateGcd(r)));
+                else unsolvable.Add((rows[r], BigInteger.GreatestCommonDivisor(elimination.KernelCoordinateGcd(r), reversed.KernelCoordinateGcd(mirror))));
             }
-            Blocks.Add((elimination.PivotMinor, unsolvable));
+            Blocks.Add((BigInteger.GreatestCommonDivisor(elimination.PivotMinor, reversed.PivotMinor), unsolvable));
             if (layer.Count == 0) break;
             Layers.Add(layer.ToArray());
             foreach (var v in layer) { processed[v] = true; frontier.Remove(v); }

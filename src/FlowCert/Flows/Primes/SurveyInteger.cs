@@ -10,9 +10,9 @@ public enum IntegerOrigin
     WeightNumerator,
     /// <summary>The denominator of a weight: at its primes the weight is undefined.</summary>
     WeightDenominator,
-    /// <summary>A non-zero r x r minor of a layer's integer-scaled block (r its rank over Q): a multiple of d_r.</summary>
+    /// <summary>The gcd of two non-zero r x r minors of a layer's integer-scaled block (r its rank over Q): a multiple of d_r.</summary>
     PivotMinor,
-    /// <summary>The gcd of a row's coordinates in an integral left-kernel basis of a layer's block (the row is unsolvable over Q).</summary>
+    /// <summary>The gcd of a row's coordinates in two integral left-kernel bases of a step's block (the row is unsolvable over Q).</summary>
     KernelCoordinate,
 }
 
