@@ -7,7 +7,7 @@ using FlowCert.Noise;
 namespace FlowCert.Cli;
 
 /// <summary>
-/// <c>flowcert noise CERT [--db D | --sweep FROM:TO:STEP] [--phases FILE] [--target V] [--json]</c>: the exact
+/// <c>flowcert noise CERT [--db D | --sweep FROM:TO:STEP] [--phases FILE] [--target V] [--format text|json]</c>: the exact
 /// added noise of a continuous-variable flow pattern under finite squeezing (docs/noise.md).
 /// </summary>
 public static class NoiseCommand
@@ -19,10 +19,12 @@ public static class NoiseCommand
         var sweep = new Option<string?>("--sweep") { Description = "FROM:TO:STEP in dB: a table of the noise over squeezing levels" };
         var phases = new PathOption("--phases") { Description = "a file of 'NODE t' lines: the Gaussian phase exp(i t q^2/2) before each p measurement (exact; default 0)" };
         var target = new Option<string?>("--target") { Description = "V: the least squeezing (dB) at which every output quadrature's added variance is at most V vacuum units" };
-        var json = new Option<bool>("--json") { Description = "print one JSON object with the exact matrices (rationals as strings)" };
+        var format = OutputFormat.TextOrJson("the report");
+        var json = new Option<bool>("--json") { Description = "the same as --format json: one JSON object with the exact matrices (rationals as strings)" };
         var cmd = new Command("noise", "Exact added noise of a continuous-variable flow pattern under finite squeezing; exit 0, 1 if the corrections fail, 2 for bad input")
-            { cert, db, sweep, phases, target, json };
-        cmd.SetAction(p => Execute(p.GetValue(cert)!, p.GetValue(db), p.GetValue(sweep), p.GetValue(phases), p.GetValue(target), p.GetValue(json), stdout));
+            { cert, db, sweep, phases, target, format, json };
+        cmd.SetAction(p => Execute(p.GetValue(cert)!, p.GetValue(db), p.GetValue(sweep), p.GetValue(phases), p.GetValue(target),
+            OutputFormat.IsJson(p.GetValue(format)!, p.GetValue(json), "noise"), stdout));
         return cmd;
     }
 

@@ -14,11 +14,15 @@ public static class OutputFormat
         throw new UserInputException($"--json and --format {Escaped.Of(format)} disagree: give one");
     }
 
-    /// <summary>For solve: true for json, false for text; anything else is refused.</summary>
-    public static bool IsJson(string format, bool jsonFlag) => Chosen(format, jsonFlag) switch
+    /// <summary>For commands with a text and a JSON layout: true for json, false for text; anything else is refused.</summary>
+    public static bool IsJson(string format, bool jsonFlag, string command = "solve") => Chosen(format, jsonFlag) switch
     {
         "json" => true,
         "text" => false,
-        var other => throw new UserInputException($"'{other}' is not an output format of solve: write text or json."),
+        var other => throw new UserInputException($"'{Escaped.Of(other)}' is not an output format of {command}: write text or json."),
     };
+
+    /// <summary>The <c>--format text|json</c> option of such a command.</summary>
+    public static System.CommandLine.Option<string> TextOrJson(string text)
+        => new("--format") { Description = $"text ({text}) or json (one JSON object)", DefaultValueFactory = _ => "text" };
 }

@@ -8,7 +8,7 @@ using FlowCert.Flows.Primes;
 namespace FlowCert.Cli;
 
 /// <summary>
-/// <c>flowcert primes GRAPH [--flow general|causal] [--out-dir DIR] [--check-up-to N] [--factor-seconds S] [--json]</c>:
+/// <c>flowcert primes GRAPH [--flow general|causal] [--out-dir DIR] [--check-up-to N] [--factor-seconds S] [--format text|json]</c>:
 /// the answer over every prime at once (docs/primes.md). Exit 0 when every prime is classified (and the
 /// audit, if asked, agrees), 1 when some integer could not be classified, 2 bad input, 3 when the audit
 /// finds a disagreement (a bug).
@@ -25,13 +25,14 @@ public static class PrimesCommand
         var outDir = new PathOption("--out-dir") { Description = "write the certificate over Q and one per exceptional prime into this folder" };
         var checkUpTo = new Option<string?>("--check-up-to") { Description = "audit: also solve every prime up to N directly and compare with the claim" };
         var seconds = new Option<string>("--factor-seconds") { Description = "time budget for factoring the invariants, in seconds", DefaultValueFactory = _ => "10" };
-        var json = new Option<bool>("--json") { Description = "print one JSON object instead of the table" };
+        var format = OutputFormat.TextOrJson("the table");
+        var json = new Option<bool>("--json") { Description = "the same as --format json" };
         var inputs = ConvertCommand.InputsOption();
         var outputs = ConvertCommand.OutputsOption();
         var cmd = new Command("primes", "The verdict and minimum depth over every prime field at once: exceptional primes solved directly, every other prime as over Q")
-            { graph, flow, outDir, checkUpTo, seconds, json, inputs, outputs };
+            { graph, flow, outDir, checkUpTo, seconds, format, json, inputs, outputs };
         cmd.SetAction(p => Execute(p.GetValue(graph)!, p.GetValue(flow)!, p.GetValue(outDir), p.GetValue(checkUpTo), p.GetValue(seconds)!,
-            p.GetValue(json), stdout, p.GetValue(inputs), p.GetValue(outputs)));
+            OutputFormat.IsJson(p.GetValue(format)!, p.GetValue(json), "primes"), stdout, p.GetValue(inputs), p.GetValue(outputs)));
         return cmd;
     }
 

@@ -76,12 +76,12 @@ public static class SimulateCommand
             {
                 int p = (int)result.Field.Prime;
                 given = request.Angles is null ? new MeasurementAngles(p, new Dictionary<int, double[]>())
-                    : MeasurementAngles.Parse(File.ReadAllText(request.Angles), request.Angles, result.Graph, p);
+                    : MeasurementAngles.Parse(InputText.ReadAll(request.Angles), request.Angles, result.Graph, p);
                 double rows = Math.Pow(p, result.Graph.Outputs.Count), columns = Math.Pow(p, result.Graph.Inputs.Count);
                 if (request.Map && request.Out is null && rows * columns > MaxPrintedEntries)
                     throw new UserInputException($"the map has {rows:0} x {columns:0} entries, too many to print: write it as JSON with --out FILE");
                 if (request.Expect is not null)
-                    claim = MapFiles.ReadClaim(File.ReadAllText(request.Expect), request.Expect, p, (int)rows, (int)columns);
+                    claim = MapFiles.ReadClaim(InputText.ReadAll(request.Expect), request.Expect, p, (int)rows, (int)columns);
             }
             pattern = QuditPattern.FromFlow(result, dim, seed, given?.Diagonals());
             foreach (var problem in pattern.Violations) Terminal.Warn($"{certPath}: {problem}", stderr);

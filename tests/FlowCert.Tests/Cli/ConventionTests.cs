@@ -33,6 +33,25 @@ public class ConventionTests
     }
 
     [Fact]
+    public void NoiseAndPrimesTakeFormatJsonLikeSolveWithJsonKept()
+    {
+        using var w = new Workspace();
+        w.Write("wire.ograph", Wire);
+        Assert.Equal(0, Flowcert.InProcess("solve", w.PathOf("wire.ograph"), "--out", w.PathOf("wire.Q.json")).ExitCode);
+        foreach (var args in new[] { new[] { "noise", w.PathOf("wire.Q.json") }, ["primes", w.PathOf("wire.ograph")] })
+        {
+            var format = Flowcert.InProcess([.. args, "--format", "json"]);
+            Assert.Equal(0, format.ExitCode);
+            Assert.StartsWith("{", format.Stdout.TrimStart());
+            Assert.Equal(format.Stdout, Flowcert.InProcess([.. args, "--json"]).Stdout);
+            Assert.DoesNotContain("{", Flowcert.InProcess([.. args, "--format", "text"]).Stdout.Split('\n')[0]);
+            var bad = Flowcert.InProcess([.. args, "--format", "csv"]);
+            Assert.Equal(2, bad.ExitCode);
+            Assert.Contains($"not an output format of {args[0]}", bad.Stderr);
+        }
+    }
+
+    [Fact]
     public void FieldFormatAndOutTakeOneShapeWithTheOldSpellingsKept()
     {
         using var w = Solved();
