@@ -119,7 +119,7 @@ public static class SimulateCommand
         var entry = $"entry (out {ImplementedMap.BasisLabel(p, g.Outputs.Count, c.Row)}, in {ImplementedMap.BasisLabel(p, g.Inputs.Count, c.Column)})";
         var branch = pattern.Order.Count == 0 ? "" : " in the branch with raw outcomes " + string.Join(" ", pattern.Order.Select(v => $"{g.Names[v]}={c.Raw[v]}"));
         o.WriteLine(c.Agrees
-            ? $"claim        {claimPath}: agrees with all {c.Branches} branch(es) up to a global phase (largest entry difference {G(c.Largest)}, tolerance {G(MapComparison.Tolerance)})"
+            ? $"claim        {claimPath}: agrees with {(c.Branches == 1 ? "the 1 branch" : $"all {c.Branches} branches")} up to a global phase (largest entry difference {G(c.Largest)}, tolerance {G(MapComparison.Tolerance)})"
             : $"claim        {claimPath}: differs: largest difference {G(c.Largest)} at {entry}{branch}: computed {MapFiles.Entry(c.Computed, 6)}, " +
               $"claimed {MapFiles.Entry(c.Claimed, 6)} (after the best global phase; tolerance {G(MapComparison.Tolerance)})");
     }

@@ -29,7 +29,7 @@ public static class CircuitWriters
     {
         var g = c.Graph;
         var t = new StringBuilder();
-        t.Append($"circuit of a causal flow: field {c.Field.Name}, {c.Wires.Count} wire(s), {c.Gates.Count} gate(s); w = exp(2 pi i / {c.Dimension})\n");
+        t.Append($"circuit of a causal flow: field {c.Field.Name}, {Graphs.Formats.Counted.Of(c.Wires.Count, "wire")}, {Graphs.Formats.Counted.Of(c.Gates.Count, "gate")}; w = exp(2 pi i / {c.Dimension})\n");
         t.Append("wires\n");
         foreach (var w in c.Wires) t.Append($"  {Wire(w.Index),-4} {Path(c, w)}\n");
         t.Append("gates (in order; F_a|j> = sum_k w^(a j k)|k> / sqrt p, D = diag(e^(i theta_j)), CZ^a|j,k> = w^(a j k)|j,k>)\n");

@@ -24,7 +24,7 @@ public static class NoiseAnalysis
         if (!flow.HasFlow)
             throw new NoiseInputException("the certificate proves that no flow exists: there is no pattern whose noise could be computed.");
         if (g.Inputs.Count != g.Outputs.Count)
-            throw new NoiseInputException($"the graph has {g.Inputs.Count} input(s) and {g.Outputs.Count} output(s): the noise model compares the pattern with a unitary, so it needs as many outputs as inputs.");
+            throw new NoiseInputException($"the graph has {Graphs.Formats.Counted.Of(g.Inputs.Count, "input")} and {Graphs.Formats.Counted.Of(g.Outputs.Count, "output")}: the noise model compares the pattern with a unitary, so it needs as many outputs as inputs.");
         foreach (var (v, _) in phases)
             if (g.Outputs.Contains(v)) throw new NoiseInputException($"{g.Names[v]} is an output and is never measured: it has no measurement phase.");
 

@@ -17,7 +17,7 @@ public static class NoiseText
         var o = new StringBuilder();
         string Names(IEnumerable<int> nodes) => string.Join(" ", nodes.Select(v => g.Names[v]));
         o.Append($"noise of {source}: {FlowKinds.Adjective(report.Flow.Kind)} flow over Q, depth {report.Flow.Depth}\n");
-        o.Append($"  inputs {Names(report.Inputs)}; outputs {Names(report.Outputs)}; {report.Squeezed.Count} squeezed node(s)\n");
+        o.Append($"  inputs {Names(report.Inputs)}; outputs {Names(report.Outputs)}; {Graphs.Formats.Counted.Of(report.Squeezed.Count, "squeezed node")}\n");
         o.Append(report.Phases.Count == 0
             ? "  phases: t = 0 on every measured node\n"
             : $"  phases: {string.Join(", ", report.Phases.Select(p => $"{g.Names[p.Key]} {p.Value}"))}; 0 elsewhere\n");
@@ -27,7 +27,7 @@ public static class NoiseText
         {
             var first = report.Leaks[0];
             o.Append($"invalid: the anti-squeezed quadrature q of {g.Names[first.Node]} reaches {report.RowName(first.Row)} with coefficient {first.Coefficient}: "
-                + $"the corrections do not cancel it, so this noise grows as e^(2r) ({report.Leaks.Count} such term(s) in all)\n");
+                + $"the corrections do not cancel it, so this noise grows as e^(2r) ({Graphs.Formats.Counted.Of(report.Leaks.Count, "such term")} in all)\n");
         }
         o.Append("ideal map S:\n");
         for (int row = 0; row < report.Rows; row++)

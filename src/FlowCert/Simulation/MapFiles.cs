@@ -97,13 +97,13 @@ public static class MapFiles
         if (root is not JArray array || array.Any(row => row is not JArray))
             throw source.At(root, "a claimed matrix is an array of rows, each an array of entries");
         if (array.Count != rows)
-            throw source.At(root, $"the claim has {array.Count} row(s); the map has {rows} (p^|O| rows, one per output basis state, by {columns} column(s))");
+            throw source.At(root, $"the claim has {Graphs.Formats.Counted.Of(array.Count, "row")}; the map has {rows} (p^|O| rows, one per output basis state, by {Graphs.Formats.Counted.Of(columns, "column")})");
         var m = Matrix<Complex>.Build.Dense(rows, columns);
         for (int r = 0; r < rows; r++)
         {
             var row = (JArray)array[r];
             if (row.Count != columns)
-                throw source.At(row, $"row {r + 1} has {row.Count} entries; the map has {columns} column(s) (p^|I|, one per input basis state)");
+                throw source.At(row, $"row {r + 1} has {row.Count} entries; the map has {Graphs.Formats.Counted.Of(columns, "column")} (p^|I|, one per input basis state)");
             for (int c = 0; c < columns; c++)
             {
                 var entry = row[c];

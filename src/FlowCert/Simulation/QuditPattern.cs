@@ -75,7 +75,7 @@ public sealed class QuditPattern
         double amplitudes = Math.Pow(p, plan.PeakQudits);
         if (amplitudes > MaxAmplitudes)
             throw new SimulationException($"the schedule keeps up to {plan.PeakLive} of {g.NodeCount} qudits of dimension {p} live at once, with " +
-                $"{plan.PeakQudits - plan.PeakLive} reference qudit(s) for the inputs: {p}^{plan.PeakQudits} = {amplitudes:0} amplitudes, more than the limit of 2^22 = {MaxAmplitudes}: simulate a narrower design");
+                $"{Graphs.Formats.Counted.Of(plan.PeakQudits - plan.PeakLive, "reference qudit")} for the inputs: {p}^{plan.PeakQudits} = {amplitudes:0} amplitudes, more than the limit of 2^22 = {MaxAmplitudes}: simulate a narrower design");
         int[] Dense(SparseVector<ulong> x)
         {
             var a = new int[g.NodeCount];

@@ -33,6 +33,27 @@ public class ConventionTests
     }
 
     [Fact]
+    public void NoMessageInTheSourcesWritesAPluralAsParenthesisS()
+    {
+        // Every count goes through Counted.Of ("1 input", "2 inputs"); "(s)" or "(es)" after a word inside a
+        // string literal is the old shape (a lowercase word, so calls such as Of(s) are not counted). Comments are not messages.
+        var root = FlowCert.Tests.Certificates.CorpusTests.RepositoryRoot();
+        var found = new List<string>();
+        foreach (var file in Directory.EnumerateFiles(Path.Combine(root, "src"), "*.cs", SearchOption.AllDirectories))
+        {
+            if (file.Contains($"{Path.DirectorySeparatorChar}obj{Path.DirectorySeparatorChar}")) continue;
+            var lines = File.ReadAllLines(file);
+            for (int i = 0; i < lines.Length; i++)
+            {
+                var code = lines[i].TrimStart();
+                if (code.StartsWith("//")) continue;
+                if (System.Text.RegularExpressions.Regex.IsMatch(code, @"""[^""]*\b[a-z]+\((s|es)\)")) found.Add($"{Path.GetRelativePath(root, file)}:{i + 1}");
+            }
+        }
+        Assert.True(found.Count == 0, "plurals written as (s): " + string.Join(", ", found));
+    }
+
+    [Fact]
     public void NoiseAndPrimesTakeFormatJsonLikeSolveWithJsonKept()
     {
         using var w = new Workspace();

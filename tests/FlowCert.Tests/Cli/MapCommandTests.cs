@@ -44,7 +44,7 @@ public sealed class MapCommandTests : IDisposable
         Assert.StartsWith("{\n  \"format\": \"flowcert-map\"", File.ReadAllText(claim));
         var ok = Run("simulate", graph, "--cert", cert, "--angles", angles, "--expect", claim);
         Assert.True(ok.Code == 0, ok.Out + ok.Err);
-        Assert.Contains("agrees with all 625 branch(es)", ok.Out);
+        Assert.Contains("agrees with all 625 branches", ok.Out);
 
         // 1. A wrong angle.
         var wrong = Write("wrong.txt", Angles.Replace("r0c1 0.1,0.2", "r0c1 0.1,0.25"));
@@ -104,7 +104,7 @@ public sealed class MapCommandTests : IDisposable
     }
 
     [Theory]
-    [InlineData("[[1, 0], [0, 1]]", "the claim has 2 row(s); the map has 25")]
+    [InlineData("[[1, 0], [0, 1]]", "the claim has 2 rows; the map has 25")]
     [InlineData("{\"rows\": []}", "an object with a \"matrix\" key")]
     public void AClaimOfTheWrongShapeIsRefused(string text, string expected)
     {
@@ -132,7 +132,7 @@ public sealed class MapCommandTests : IDisposable
         var angles = Write("angles.txt", Angles);
         var (code, text, _) = Run("circuit", cert, "--angles", angles);
         Assert.Equal(0, code);
-        Assert.Contains("circuit of a causal flow: field F5, 2 wire(s)", text);
+        Assert.Contains("circuit of a causal flow: field F5, 2 wires", text);
         Assert.Equal(text, Run("circuit", cert, "--angles", angles).Out);
         (code, var json, _) = Run("circuit", cert, "--format", "json");
         Assert.Equal(0, code);

@@ -74,7 +74,7 @@ public class SimulateCommandTests
             var (code, o, e) = Run("simulate", graph, "--cert", cert);
             Assert.Equal(2, code);
             Assert.Equal("", o);
-            Assert.Contains("up to 11 of 20 qudits of dimension 5 live at once, with 10 reference qudit(s) for the inputs: 5^21 = 476837158203125 amplitudes, more than the limit", e);
+            Assert.Contains("up to 11 of 20 qudits of dimension 5 live at once, with 10 reference qudits for the inputs: 5^21 = 476837158203125 amplitudes, more than the limit", e);
             Assert.Single(e.Trim().Split('\n'));
         }
         finally { Directory.Delete(dir, true); }
