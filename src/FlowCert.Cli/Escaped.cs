@@ -1,4 +1,4 @@
-using System.Text;
+using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Cli;
 
@@ -9,19 +9,6 @@ namespace FlowCert.Cli;
 /// </summary>
 public static class Escaped
 {
-    /// <summary>The text with every control character escaped; nothing is cut.</summary>
-    public static string Of(string text)
-    {
-        if (!text.Any(char.IsControl)) return text;
-        var sb = new StringBuilder(text.Length + 16);
-        foreach (var c in text)
-        {
-            if (c == '\n') sb.Append("\\n");
-            else if (c == '\t') sb.Append("\\t");
-            else if (c == '\r') sb.Append("\\r");
-            else if (char.IsControl(c)) sb.Append($"\\u{(int)c:x4}");
-            else sb.Append(c);
-        }
-        return sb.ToString();
-    }
+    /// <summary>The text with every control character escaped; nothing is cut (<see cref="Excerpt.Escape"/>).</summary>
+    public static string Of(string text) => Excerpt.Escape(text, null);
 }

@@ -9,12 +9,16 @@ public static class Excerpt
     public const int MaxLength = 80;
 
     /// <summary>The text with control characters written as \n, \t, \r or \uXXXX, cut to <see cref="MaxLength"/> characters.</summary>
-    public static string Of(string text)
+    public static string Of(string text) => Escape(text, MaxLength);
+
+    /// <summary>The text with control characters written as \n, \t, \r or \uXXXX, cut after <paramref name="maxLength"/> characters with "..." (never cut when null).</summary>
+    public static string Escape(string text, int? maxLength)
     {
-        var sb = new StringBuilder(Math.Min(text.Length, MaxLength) + 8);
+        if (maxLength is null && !text.Any(char.IsControl)) return text;
+        var sb = new StringBuilder(Math.Min(text.Length, maxLength ?? text.Length) + 8);
         foreach (var c in text)
         {
-            if (sb.Length >= MaxLength) return sb.Append("...").ToString();
+            if (sb.Length >= maxLength) return sb.Append("...").ToString();
             if (c == '\n') sb.Append("\\n");
             else if (c == '\t') sb.Append("\\t");
             else if (c == '\r') sb.Append("\\r");
