@@ -39,9 +39,10 @@ public static class Certificate
         if (verdict is not ("flow" or "noflow")) throw new InvalidCertificate($"unknown verdict \"{Json.Cut(verdict)}\" (expected flow or noflow)");
         foreach (var key in (verdict == "flow" ? ["obstruction"] : new[] { "depth", "rounds", "corrections" }).Where(k => json.Find("", k)))
             throw new InvalidCertificate($"key \"{key}\" does not belong to a \"{verdict}\" certificate");
+        var prose = flow switch { "general" => "generalized", "pauli" => "Pauli", _ => flow }; // the names used in prose
         var proven = verdict == "flow"
-            ? $"{flow} flow over {field.Name}, depth {new FlowClaim(g, causal, progress, labelled).Check(json)}"
-            : $"no {flow} flow over {field.Name}, blocked set of {new NoFlowClaim(g, causal, progress, labelled).Check(json)} nodes";
+            ? $"{prose} flow over {field.Name}, depth {new FlowClaim(g, causal, progress, labelled).Check(json)}"
+            : $"no {prose} flow over {field.Name}, blocked set of {(new NoFlowClaim(g, causal, progress, labelled).Check(json) is var n && n == 1 ? "1 node" : $"{n} nodes")}";
         var lines = new List<string> { $"valid: {proven}, graph sha256 {hash}" };
         if (fileGraph is not null) lines.Add($"note: graph file {graphPath} matches the embedded graph");
         lines.AddRange(g.Vanished.Select(e => $"note: edge {g.Name(e.U)} {g.Name(e.V)} (weight {Json.Cut(graph.WeightText[e.W])}) vanishes in {field.Name}"));

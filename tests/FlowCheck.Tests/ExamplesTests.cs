@@ -32,13 +32,13 @@ public class ExamplesTests
     {
         AssertValid(Examples.WireCausal(), "valid: causal flow over Q, depth 2");
         AssertValid(Examples.WireCausal("F5"), "valid: causal flow over F5, depth 2");
-        AssertValid(Examples.SquareQ(), "valid: general flow over Q, depth 1");
-        AssertValid(Examples.SquareF3(), "valid: general flow over F3, depth 1");
-        AssertValid(Examples.GflowF2(), "valid: general flow over F2, depth 2");
-        AssertValid(Examples.NothingMeasured(), "valid: general flow over Q, depth 0");
-        AssertValid(Examples.SquareF2NoFlow(), "valid: no general flow over F2, blocked set of 2 nodes");
+        AssertValid(Examples.SquareQ(), "valid: generalized flow over Q, depth 1");
+        AssertValid(Examples.SquareF3(), "valid: generalized flow over F3, depth 1");
+        AssertValid(Examples.GflowF2(), "valid: generalized flow over F2, depth 2");
+        AssertValid(Examples.NothingMeasured(), "valid: generalized flow over Q, depth 0");
+        AssertValid(Examples.SquareF2NoFlow(), "valid: no generalized flow over F2, blocked set of 2 nodes");
         AssertValid(Examples.GflowCausalNoFlow(), "valid: no causal flow over F2, blocked set of 3 nodes");
-        AssertValid(Examples.FanGeneralNoFlow(), "valid: no general flow over Q, blocked set of 2 nodes");
+        AssertValid(Examples.FanGeneralNoFlow(), "valid: no generalized flow over Q, blocked set of 2 nodes");
     }
 
     [Fact]

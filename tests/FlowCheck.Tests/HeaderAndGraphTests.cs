@@ -146,7 +146,7 @@ public class HeaderAndGraphTests
             c["graph"]!["edges"]![0]![2] = "4";
             c["graph"]!["edges"]![3]![2] = "1/2";
         });
-        AssertValid(cert, "valid: general flow over F3, depth 1");
+        AssertValid(cert, "valid: generalized flow over F3, depth 1");
     }
 
     [Fact]
@@ -157,7 +157,7 @@ public class HeaderAndGraphTests
             c["graph"]!["edges"] = JArray.Parse("[['a','b','6'],['a','x','1'],['a','y','1'],['b','x','1'],['b','y','-1']]"));
         var r = Check(cert);
         Assert.Equal(0, r.Code);
-        Assert.Equal(["valid: general flow over F3, depth 1, graph sha256 " + cert["graphSha256"], "note: edge a b (weight 6) vanishes in F3"],
+        Assert.Equal(["valid: generalized flow over F3, depth 1, graph sha256 " + cert["graphSha256"], "note: edge a b (weight 6) vanishes in F3"],
             r.Out.ReplaceLineEndings("\n").TrimEnd('\n').Split('\n'));
     }
 

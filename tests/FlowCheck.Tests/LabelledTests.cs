@@ -174,7 +174,7 @@ public class LabelledTests(ITestOutputHelper output)
     [Fact]
     public void HandWrittenPauliFlowIsValidAndEachRuleHasItsMessage()
     {
-        AssertValid(PauliWireFlow(), "valid: pauli flow over F2, depth 1");
+        AssertValid(PauliWireFlow(), "valid: Pauli flow over F2, depth 1");
         // P1: a labelled XY may not sit in p(i) unless later
         AssertInvalid(Edit(PauliWireFlow(), c => c["graph"]!["labels"] = JObject.Parse("{'i':'X'}")), "node i (round 1): a (labelled XY) is in p_i but not later");
         // P9 at a labelled Z: a must be in p(a)
@@ -207,7 +207,7 @@ public class LabelledTests(ITestOutputHelper output)
         // the systems of docs/algorithms.md: i's row has no unknown; for a, i's row plus a's self row cancel).
         const string graph = "{'inputs':['i'],'outputs':['o'],'nodes':['a','b','i','o'],'edges':[['a','b','1'],['a','i','1'],['b','o','1']],'labels':{'a':'XZ','b':'Y'}}";
         JObject Proof(string witnesses) => V2("pauli", "F2", graph, $"'verdict':'noflow','obstruction':{{'blocked':['a','i'],'witnesses':{witnesses}}}");
-        AssertValid(Proof("{'a':{'rows':['i'],'self':true},'i':{'rows':['i'],'self':false}}"), "valid: no pauli flow over F2, blocked set of 2 nodes");
+        AssertValid(Proof("{'a':{'rows':['i'],'self':true},'i':{'rows':['i'],'self':false}}"), "valid: no Pauli flow over F2, blocked set of 2 nodes");
         AssertInvalid(Proof("{'a':{'rows':['i'],'self':false},'i':{'rows':['i'],'self':false}}"), "obstruction.witnesses.a: (y^T M)(a) = 1");
         AssertInvalid(Proof("{'a':{'rows':['a','i'],'self':true},'i':{'rows':['i'],'self':false}}"), "obstruction.witnesses.a: (y^T M)(b) = 1");
         AssertInvalid(Proof("{'a':{'rows':['i'],'self':true},'i':{'rows':[],'self':false}}"), "y^T b = 0, not 1");

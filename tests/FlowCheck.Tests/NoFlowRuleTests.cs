@@ -40,10 +40,10 @@ public class NoFlowRuleTests
         // With o an input as well as an output, o is not a corrector: {a} is then blocked (C = {b}, no edge a-b).
         var cert = Edit(Examples.FanCausalNoFlow(), c => c["graph"]!["inputs"] = new JArray("o"));
         cert["obstruction"] = JObject.Parse("{'blocked':['a']}");
-        AssertValid(cert, "valid: no causal flow over Q, blocked set of 1 nodes");
+        AssertValid(cert, "valid: no causal flow over Q, blocked set of 1 node");
         var general = Edit(Examples.FanGeneralNoFlow(), c => c["graph"]!["inputs"] = new JArray("o"));
         general["obstruction"] = JObject.Parse("{'blocked':['a'],'witnesses':[{'a':'1'}]}");
-        AssertValid(general, "valid: no general flow over Q, blocked set of 1 nodes");
+        AssertValid(general, "valid: no generalized flow over Q, blocked set of 1 node");
     }
 
     [Theory]
@@ -76,7 +76,7 @@ public class NoFlowRuleTests
     public void WitnessesMayBeSeveralAndScaled()
     {
         var cert = WithObstruction(Examples.FanGeneralNoFlow(), "{'blocked':['a','b'],'witnesses':[{'a':'-2/3','b':'2/3'},{'a':'5','b':'-5'}]}");
-        AssertValid(cert, "valid: no general flow over Q, blocked set of 2 nodes");
+        AssertValid(cert, "valid: no generalized flow over Q, blocked set of 2 nodes");
     }
 
     [Fact]

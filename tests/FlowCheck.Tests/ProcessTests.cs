@@ -26,7 +26,7 @@ public class ProcessTests
         var graph = Support.Write("edge a x\nedge a y\nedge b x\nedge b y -1\noutput x y\n", ".ograph");
         var (code, stdout, stderr) = Flowcheck(cert, "--graph", graph);
         Assert.Equal("", stderr);
-        Assert.StartsWith("valid: general flow over F3, depth 1, graph sha256 ", stdout);
+        Assert.StartsWith("valid: generalized flow over F3, depth 1, graph sha256 ", stdout);
         Assert.Equal(0, code);
     }
 
