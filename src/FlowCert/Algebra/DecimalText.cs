@@ -17,6 +17,7 @@ internal static class DecimalText
     /// <summary>The decimal text of n: an optional '-' and digits without leading zeros.</summary>
     public static string Of(BigInteger n)
     {
+        if (n.GetBitLength() < 64) return ((long)n).ToString(CultureInfo.InvariantCulture); // the common small value, without BigInteger formatting
         if (n.GetBitLength() <= DirectBits) return n.ToString(CultureInfo.InvariantCulture);
         var powers = new List<BigInteger>(); // powers[k] = 10^(Chunk * 2^k)
         var sb = new System.Text.StringBuilder();

@@ -54,6 +54,11 @@ public readonly struct PrimeField : IField<ulong>
     /// <summary>Reduces an integer into 0..p-1.</summary>
     public ulong FromInteger(BigInteger n)
     {
+        if (n.GetBitLength() < 63) // the usual small weight: long arithmetic (P < 2^62, so r + P cannot overflow)
+        {
+            long small = (long)n % (long)P;
+            return (ulong)(small < 0 ? small + (long)P : small);
+        }
         var r = BigInteger.Remainder(n, P);
         return (ulong)(r.Sign < 0 ? r + P : r);
     }
@@ -61,6 +66,7 @@ public readonly struct PrimeField : IField<ulong>
     /// <inheritdoc/>
     public ulong FromRational(Rational r)
     {
+        if (r.Denominator.IsOne) return FromInteger(r.Numerator);
         var den = FromInteger(r.Denominator);
         if (den == 0) throw new NotInFieldException($"{r} has no value in F_{P}: {P} divides its denominator");
         return Multiply(FromInteger(r.Numerator), Inverse(den));

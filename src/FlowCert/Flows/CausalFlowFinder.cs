@@ -22,7 +22,7 @@ internal static class CausalFlowFinder
         {
             if (state.UnprocessedNeighbours[u] != 1) continue;
             int v = Array.Find(g.Neighbours[u], w => !state.Processed[w]);
-            chosen.TryAdd(v, u); // Active is visited in increasing order: the first u is the smallest
+            if (!chosen.TryGetValue(v, out var other) || u < other) chosen[v] = u; // the smallest such corrector
         }
         if (chosen.Count == 0) return LayerOutcome.Stuck(new BlockedSet(state.Unprocessed(), []));
         return LayerOutcome.Found(chosen.ToDictionary(

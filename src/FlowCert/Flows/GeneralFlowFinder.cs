@@ -18,11 +18,7 @@ internal static class GeneralFlowFinder
         where T : struct where TField : struct, IField<T>
     {
         var f = g.Field;
-        var frontier = new SortedSet<int>();
-        foreach (var c in state.Active)
-            foreach (var w in g.Neighbours[c])
-                if (!state.Processed[w]) frontier.Add(w);
-        var rows = frontier.ToArray();
+        var rows = state.Frontier();
         var matrix = new SparseVector<T>[rows.Length];
         for (int r = 0; r < rows.Length; r++)
         {
