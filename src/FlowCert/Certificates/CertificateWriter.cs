@@ -1,3 +1,4 @@
+using FlowCert.Algebra;
 using FlowCert.Flows;
 using FlowCert.Graphs;
 using FlowCert.Graphs.Formats;
@@ -18,7 +19,10 @@ public static class CertificateWriter
     public const int LabelledVersion = 2;
 
     /// <summary>The version a result is written with: 2 when its graph has labels or its kind is Pauli, else 1.</summary>
-    public static int VersionOf(FlowResult r) => r.Graph.HasLabels || r.Kind == FlowKind.Pauli ? LabelledVersion : Version;
+    public static int VersionOf(FlowResult r) => VersionOf(r.Graph, r.Kind);
+
+    private static int VersionOf(OpenGraph g, FlowKind kind) => g.HasLabels || kind == FlowKind.Pauli ? LabelledVersion : Version;
+
     /// <summary>The producer name written into every certificate.</summary>
     public const string ProducerName = "flowcert";
     /// <summary>Written into every certificate: the library's version (Version in Directory.Build.props), as major.minor.patch.</summary>
@@ -37,6 +41,31 @@ public static class CertificateWriter
     /// million-node certificate is over 100 MB); the bytes are those of <see cref="Write(FlowResult)"/>.
     /// </summary>
     public static void Write(FlowResult r, TextWriter w)
+    {
+        WriteHead(r.Graph, r.Field, r.Kind, w);
+        WriteBody(r, w);
+    }
+
+    /// <summary>
+    /// The part of the certificate known before solving (header, graph hash, graph block): with
+    /// <see cref="WriteBody"/> after it, the bytes of <see cref="Write(FlowResult, TextWriter)"/>. A caller
+    /// may write it while the solver runs.
+    /// </summary>
+    public static void WriteHead(OpenGraph g, FieldSpec field, FlowKind kind, TextWriter w)
+    {
+        w.Write("{\n");
+        w.Write($"  \"format\": {Quote(Format)},\n");
+        w.Write($"  \"version\": {VersionOf(g, kind)},\n");
+        w.Write($"  \"flow\": {Quote(FlowKinds.Name(kind))},\n");
+        w.Write($"  \"field\": {Quote(field.Name)},\n");
+        w.Write($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
+        w.Write("  \"graph\": ");
+        GraphJson.WriteObject(g, "  ", w);
+        w.Write(",\n");
+    }
+
+    /// <summary>The rest of the certificate after <see cref="WriteHead"/>: the verdict and its evidence.</summary>
+    public static void WriteBody(FlowResult r, TextWriter w)
     {
         var g = r.Graph;
         void Name(int v) => JsonSource.WriteQuoted(w, g.Names[v]);
@@ -76,15 +105,6 @@ public static class CertificateWriter
             w.Write(close);
         }
 
-        w.Write("{\n");
-        w.Write($"  \"format\": {Quote(Format)},\n");
-        w.Write($"  \"version\": {VersionOf(r)},\n");
-        w.Write($"  \"flow\": {Quote(FlowKinds.Name(r.Kind))},\n");
-        w.Write($"  \"field\": {Quote(r.Field.Name)},\n");
-        w.Write($"  \"graphSha256\": {Quote(CanonicalForm.Sha256(g))},\n");
-        w.Write("  \"graph\": ");
-        GraphJson.WriteObject(g, "  ", w);
-        w.Write(",\n");
         if (r.Obstruction is null)
         {
             w.Write("  \"verdict\": \"flow\",\n");

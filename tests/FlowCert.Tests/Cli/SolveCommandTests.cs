@@ -280,6 +280,24 @@ public class SolveCommandTests
         Assert.DoesNotContain(w.Listing(), f => f.EndsWith(".tmp"));
     }
 
+    // solve --out writes the certificate's head on a second core while solving, then the body: the bytes must
+    // be those of the library's one-piece writer, for a flow and for a proof of absence.
+    [Fact]
+    public void TheCertificateWrittenBesideTheSolveIsTheLibrarysCertificate()
+    {
+        using var w = new Workspace();
+        foreach (var (design, name) in new[] { (Designs.Wire, "wire"), (Designs.Merge, "merge") })
+            foreach (var field in new[] { "Q", "2" })
+            {
+                var graph = w.Write($"{name}.ograph", design);
+                var cert = w.PathOf($"{name}.{field}.json");
+                Flowcert.InProcess("solve", graph, "--field", field, "--out", cert);
+                var expected = FlowCert.Certificates.CertificateWriter.Write(FlowCert.Flows.FlowSolver.Solve(
+                    FlowCert.Graphs.OgraphReader.Parse(design, graph), FlowCert.Algebra.FieldSpec.Parse(field), FlowCert.Flows.FlowKind.General));
+                Assert.Equal(expected, File.ReadAllText(cert));
+            }
+    }
+
     [Fact]
     public void AnOutputPathThatIsAFolderIsRefusedNamingIt()
     {
