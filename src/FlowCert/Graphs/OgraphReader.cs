@@ -51,7 +51,8 @@ public static partial class OgraphReader
         private bool[] declared = new bool[16];
         private readonly List<int> edgeU = new(), edgeV = new();
         private readonly List<Rational> weights = new();
-        private readonly Dictionary<long, int> edgeLines = new(PackedEdgeKeyComparer.Instance);
+        // Where each edge's first name is (line, column), for the repeated-edge error found in Build.
+        private readonly List<int> edgeLines = new(), edgeColumns = new();
         private readonly Dictionary<int, int> inputs = new(), outputs = new();
         private readonly List<(int Id, int Line, int Column, string Keyword)> references = new();
         private readonly Dictionary<int, PositionHint> positions = new();
@@ -205,10 +206,7 @@ public static partial class OgraphReader
             if (u == v) throw Error(2, $"self-loop on node {names[u]}: a graph state has no edge from a node to itself");
             var w = Rational.One;
             if (count == 4) w = Weight(u, v);
-            long key = u < v ? ((long)u << 32) | (uint)v : ((long)v << 32) | (uint)u;
-            if (edgeLines.TryGetValue(key, out var firstLine))
-                throw Error(1, $"edge {names[u]} {names[v]} appears twice (lines {firstLine} and {lineNo})");
-            edgeLines[key] = lineNo;
+            edgeLines.Add(lineNo); edgeColumns.Add(starts[1] + 1); // repeats are found in Build, by sorting
             declared[u] = true; declared[v] = true;
             edgeU.Add(u); edgeV.Add(v); weights.Add(w);
         }
@@ -254,14 +252,32 @@ public static partial class OgraphReader
             references.Add((n, lineNo, starts[1] + 1, "measure"));
         }
 
+        /// <summary>
+        /// The error a line-by-line check would have given: among repeated edges, the one whose second
+        /// occurrence comes first in the file, naming both lines.
+        /// </summary>
+        private void RefuseRepeatedEdges(long[] sortedKeys, int[] byKey)
+        {
+            int worst = -1, worstFirst = -1;
+            for (int start = 0, end; start < sortedKeys.Length; start = end)
+            {
+                end = start + 1;
+                int first = byKey[start], second = int.MaxValue;
+                while (end < sortedKeys.Length && sortedKeys[end] == sortedKeys[start])
+                {
+                    int e = byKey[end++];
+                    if (e < first) (first, e) = (e, first);
+                    if (e < second) second = e;
+                }
+                if (second != int.MaxValue && (worst < 0 || second < worst)) (worst, worstFirst) = (second, first);
+            }
+            if (worst < 0) return;
+            throw new GraphFormatException(fileName, edgeLines[worst], edgeColumns[worst],
+                $"edge {names[edgeU[worst]]} {names[edgeV[worst]]} appears twice (lines {edgeLines[worstFirst]} and {edgeLines[worst]})");
+        }
+
         public OpenGraph Build()
         {
-            foreach (var (id, line, column, keyword) in references)
-                if (!declared[id])
-                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{keyword}': declare it with an 'edge' or 'node' line");
-            foreach (var (id, (_, line, column)) in labels)
-                if (outputs.TryGetValue(id, out var outputLine))
-                    throw new GraphFormatException(fileName, line, column, $"node {names[id]} is an output (line {outputLine}): outputs are never measured and carry no label");
             // Declared names in ordinal order; rank maps a name id to its node index.
             var order = new List<int>(names.Count);
             for (int id = 0; id < names.Count; id++) if (declared[id]) order.Add(id);
@@ -272,16 +288,33 @@ public static partial class OgraphReader
             var rank = new int[names.Count];
             for (int i = 0; i < sortedIds.Length; i++) rank[sortedIds[i]] = i;
 
-            var us = new int[edgeU.Count];
-            var vs = new int[edgeU.Count];
-            for (int e = 0; e < us.Length; e++) { us[e] = rank[edgeU[e]]; vs[e] = rank[edgeV[e]]; }
+            // Edges sorted by (U, V) of node indices; equal neighbours in that order are a repeated edge.
+            var keys = new long[edgeU.Count];
+            var byKey = new int[keys.Length];
+            for (int e = 0; e < keys.Length; e++)
+            {
+                int a = rank[edgeU[e]], b = rank[edgeV[e]];
+                keys[e] = a < b ? ((long)a << 32) | (uint)b : ((long)b << 32) | (uint)a;
+                byKey[e] = e;
+            }
+            Array.Sort(keys, byKey);
+            RefuseRepeatedEdges(keys, byKey);
+
+            foreach (var (id, line, column, keyword) in references)
+                if (!declared[id])
+                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{keyword}': declare it with an 'edge' or 'node' line");
+            foreach (var (id, (_, line, column)) in labels)
+                if (outputs.TryGetValue(id, out var outputLine))
+                    throw new GraphFormatException(fileName, line, column, $"node {names[id]} is an output (line {outputLine}): outputs are never measured and carry no label");
+            var sortedWeights = new Rational[keys.Length];
+            for (int k = 0; k < keys.Length; k++) sortedWeights[k] = weights[byKey[k]];
             var inputIndices = new List<int>(inputs.Count);
             foreach (var id in inputs.Keys) inputIndices.Add(rank[id]);
             var outputIndices = new List<int>(outputs.Count);
             foreach (var id in outputs.Keys) outputIndices.Add(rank[id]);
             var hints = new Dictionary<int, PositionHint>(positions.Count);
             foreach (var (id, hint) in positions) hints[rank[id]] = hint;
-            var graph = OpenGraph.FromIndices(sortedNames, us, vs, weights.ToArray(), inputIndices, outputIndices, hints);
+            var graph = OpenGraph.FromSortedEdges(sortedNames, keys, sortedWeights, inputIndices, outputIndices, hints);
             if (labels.Count == 0) return graph;
             var byIndex = new Dictionary<int, MeasurementLabel>(labels.Count);
             foreach (var (id, entry) in labels) byIndex[rank[id]] = entry.Label;

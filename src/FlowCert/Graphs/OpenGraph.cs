@@ -27,7 +27,9 @@ public sealed class OpenGraph
     /// <summary>The measurement label of every measured node whose label is not XY, by node index (flows.md section 9).</summary>
     public IReadOnlyDictionary<int, MeasurementLabel> Labels { get; private init; } = EmptyLabels;
     private static readonly Dictionary<int, MeasurementLabel> EmptyLabels = new();
-    private readonly Dictionary<string, int> index;
+    // Name to index, built on first use (the solver never needs it; readers of certificates do).
+    private Dictionary<string, int>? index;
+    private Dictionary<string, int> Index => LazyInitializer.EnsureInitialized(ref index, () => BuildIndex((string[])Names));
 
     /// <summary>The label of a node: XY unless one was given.</summary>
     public MeasurementLabel Label(int v) => Labels.TryGetValue(v, out var l) ? l : MeasurementLabel.XY;
@@ -95,7 +97,6 @@ public sealed class OpenGraph
         Dictionary<int, PositionHint> positions)
     {
         Names = sortedNames;
-        index = BuildIndex(sortedNames);
         Edges = edges;
         Inputs = inputs;
         Outputs = outputs;
@@ -103,18 +104,17 @@ public sealed class OpenGraph
     }
 
     /// <summary>
-    /// Builds a graph from already checked parts: distinct names in ordinal order, and edges, inputs,
-    /// outputs and positions by index into them. Edges must have distinct endpoints, nonzero weights and
-    /// no repeats (the caller has checked); they are sorted here, and the graph takes the arrays over.
+    /// Builds a graph from already checked parts: distinct names in ordinal order, edges as packed
+    /// (U, V) index pairs with U &lt; V, sorted and distinct, with their nonzero weights; inputs, outputs
+    /// and positions by index. The graph takes the arrays over.
     /// </summary>
-    internal static OpenGraph FromIndices(string[] sortedNames, int[] us, int[] vs, Rational[] weights,
+    internal static OpenGraph FromSortedEdges(string[] sortedNames, long[] sortedKeys, Rational[] weights,
         IEnumerable<int> inputs, IEnumerable<int> outputs, Dictionary<int, PositionHint> positions)
     {
-        var keys = new long[us.Length];
-        for (int e = 0; e < keys.Length; e++)
-            keys[e] = us[e] < vs[e] ? Pack(us[e], vs[e]) : Pack(vs[e], us[e]);
-        return new OpenGraph(sortedNames, SortedEdges(keys, weights),
-            new HashSet<int>(inputs), new HashSet<int>(outputs), positions);
+        var list = new List<WeightedEdge>(sortedKeys.Length);
+        for (int e = 0; e < sortedKeys.Length; e++)
+            list.Add(new WeightedEdge((int)(sortedKeys[e] >> 32), (int)(uint)sortedKeys[e], weights[e]));
+        return new OpenGraph(sortedNames, list, new HashSet<int>(inputs), new HashSet<int>(outputs), positions);
     }
 
     private static long Pack(int u, int v) => ((long)u << 32) | (uint)v;
@@ -149,10 +149,10 @@ public sealed class OpenGraph
 
     /// <summary>The index of a node name; throws <see cref="ArgumentException"/> for an unknown name.</summary>
     public int IndexOf(string name)
-        => index.TryGetValue(name, out var i) ? i : throw new ArgumentException($"unknown node '{name}'");
+        => Index.TryGetValue(name, out var i) ? i : throw new ArgumentException($"unknown node '{name}'");
 
     /// <summary>True when the graph has a node of this name.</summary>
-    public bool Contains(string name) => index.ContainsKey(name);
+    public bool Contains(string name) => Index.ContainsKey(name);
 
     /// <summary>Inputs as sorted indices.</summary>
     public int[] SortedInputs => Inputs.Order().ToArray();

@@ -108,6 +108,16 @@ public class OgraphReaderErrorTests
         Assert.Contains($"lines {first} and {line}", e.Problem);
     }
 
+    // Repeats are found after reading (by sorting the edges), but the error is the one a line-by-line reader
+    // gives: the repeat whose second occurrence comes first, with the line of its first occurrence.
+    [Theory]
+    [InlineData("edge a b\nedge c d\nedge c d\nedge b a\n", 3, 6, "edge c d appears twice (lines 2 and 3)")]
+    [InlineData("edge a b\nedge c d\nedge d c\nedge a b\nedge a b\n", 3, 6, "edge d c appears twice (lines 2 and 3)")]
+    [InlineData("edge x y\nedge a b\nedge y x 3\nedge b a\nedge a b\n", 3, 6, "edge y x appears twice (lines 1 and 3)")]
+    [InlineData("edge a b\nedge a b\nedge a b\n", 2, 6, "edge a b appears twice (lines 1 and 2)")]
+    public void OfSeveralRepeatedEdgesTheFirstRepeatInTheFileIsNamed(string text, int line, int column, string problem)
+        => Assert.Equal(problem, Refuse(text, line, column).Problem);
+
     [Theory]
     [InlineData("input x\nedge a b\n", 1, 7, "x", "input")]
     [InlineData("edge a b\noutput b  y\n", 2, 11, "y", "output")]
