@@ -120,6 +120,16 @@ public class EmbeddingTests(ITestOutputHelper output)
         Assert.True(orthogonal < total, "every certificate had K K_M^T = 0");
     }
 
+    // No flow has fewer outputs than inputs; a certificate claiming one is refused as bad input.
+    [Fact]
+    public void FewerOutputsThanInputsAreRefused()
+    {
+        var flow = PublishedNoiseTests.Certify("input a\noutput b\nedge a b 1\n");
+        var g = new FlowCert.Graphs.OpenGraph(["a", "b", "c"], [("a", "b", Rational.One), ("c", "b", Rational.One)], ["a", "c"], ["b"]);
+        var e = Assert.Throws<NoiseInputException>(() => NoiseAnalysis.Analyze(flow with { Graph = g }));
+        Assert.Contains("2 inputs and 1 output", e.Message);
+    }
+
     // The same fact on the smallest example: a - b, a - c, no input, c_a = e_b is a valid generalized flow.
     // K K_M^T != 0, yet q_b + q_c = -delta_a and p_b - p_c = delta_b - delta_c are finite: valid.
     [Fact]
