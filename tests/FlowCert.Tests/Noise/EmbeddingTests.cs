@@ -120,6 +120,47 @@ public class EmbeddingTests(ITestOutputHelper output)
         Assert.True(orthogonal < total, "every certificate had K K_M^T = 0");
     }
 
+    // A continuous-variable cluster state is defined by its nullifiers p_v - sum_u A[v][u] q_u, which are 0
+    // at infinite squeezing ("Universal quantum computation with continuous-variable cluster states",
+    // arXiv:quant-ph/0605198) and carry the squeezed variance e^(-2r)/2 at finite squeezing ("Quantum
+    // computing with continuous-variable clusters", arXiv:0903.3233). A pattern that measures nothing and
+    // has no input outputs that state: every one of its |O| finite directions is a nullifier, and each
+    // n_v has n_v^T K = 0 and n_v^T L = e_v.
+    [Fact]
+    public void AClusterStateOutputHasTheClusterNullifiersAsFiniteDirections()
+    {
+        var text = "output a b c d\nedge a b 1\nedge b c -2\nedge c d 1/2\nedge a d 3\n";
+        var g = FlowCert.Graphs.OgraphReader.Parse(text, "cluster.ograph");
+        var flow = FlowSolver.Solve(g, FieldSpec.Rationals, FlowKind.General);
+        Assert.True(flow.HasFlow);
+        var report = NoiseAnalysis.Analyze(flow);
+        Assert.True(report.Valid);
+        Assert.Equal(4, report.DirectionCount);
+        Assert.All(Enumerable.Range(0, 4), j => Assert.True(report.IsNullifier(j)));
+        var span = Rank(report.Directions);
+        foreach (var v in report.Outputs)
+        {
+            var n = new Rational[1, report.Rows];
+            for (int k = 0; k < report.Rows; k++) n[0, k] = Rational.Zero;
+            int row = 2 * report.Outputs.ToList().IndexOf(v);
+            n[0, row + 1] = Rational.One;
+            foreach (var e in g.Edges)
+            {
+                int other = e.U == v ? e.V : e.V == v ? e.U : -1;
+                if (other >= 0) n[0, 2 * report.Outputs.ToList().IndexOf(other)] -= e.Weight;
+            }
+            Assert.True(IsZero(Product(n, report.K)));
+            var nl = Product(n, report.L);
+            for (int j = 0; j < report.Squeezed.Count; j++)
+                Assert.Equal(report.Squeezed[j] == v ? Rational.One : Rational.Zero, nl[0, j]);
+            // n_v lies in the span of the reported directions.
+            var both = new Rational[5, report.Rows];
+            for (int i = 0; i < 4; i++) for (int k = 0; k < report.Rows; k++) both[i, k] = report.Directions[i, k];
+            for (int k = 0; k < report.Rows; k++) both[4, k] = n[0, k];
+            Assert.Equal(span, Rank(both));
+        }
+    }
+
     // No flow has fewer outputs than inputs; a certificate claiming one is refused as bad input.
     [Fact]
     public void FewerOutputsThanInputsAreRefused()
