@@ -71,9 +71,7 @@ public static class NoiseText
                 cells.Add(Num(NoiseFigures.CoherentStateFidelity(report, r), "0.000000"));
                 table.Add(cells.ToArray());
             }
-            var widths = Enumerable.Range(0, header.Count).Select(c => table.Max(t => t[c].Length)).ToArray();
-            foreach (var line in table)
-                o.Append("  " + string.Join("  ", line.Select((cell, c) => cell.PadLeft(widths[c]))).TrimEnd() + "\n");
+            AppendTable(o, table);
         }
         if (request.Target is { } target)
         {
@@ -142,9 +140,7 @@ public static class NoiseText
                 cells.AddRange(Enumerable.Range(0, n).Select(j => Num(NoiseFigures.DirectionAddedVariance(report, j, r), "G5")));
                 table.Add(cells.ToArray());
             }
-            var widths = Enumerable.Range(0, header.Count).Select(c => table.Max(t => t[c].Length)).ToArray();
-            foreach (var line in table)
-                o.Append("  " + string.Join("  ", line.Select((cell, c) => cell.PadLeft(widths[c]))).TrimEnd() + "\n");
+            AppendTable(o, table);
             o.Append($"  {noFidelity}\n");
         }
         if (request.Target is { } target)
@@ -153,6 +149,14 @@ public static class NoiseText
                 ? $"target: added variance at most {target} vacuum units on every finite direction needs at least {Num(need, "0.00")} dB of squeezing (r = {Num(NoiseFigures.SqueezingParameter(need), "0.0000")})\n"
                 : $"target: no squeezing level meets {target} vacuum units: the anti-squeezed noise grows with r\n");
         }
+    }
+
+    // Right-aligned columns, two spaces apart, indented by two.
+    private static void AppendTable(StringBuilder o, List<string[]> table)
+    {
+        var widths = Enumerable.Range(0, table[0].Length).Select(c => table.Max(t => t[c].Length)).ToArray();
+        foreach (var line in table)
+            o.Append("  " + string.Join("  ", line.Select((cell, c) => cell.PadLeft(widths[c]))).TrimEnd() + "\n");
     }
 
     /// <summary>Direction j as a form in the output quadratures, such as "q_b + q_c".</summary>
