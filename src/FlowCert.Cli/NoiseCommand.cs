@@ -18,7 +18,7 @@ public static class NoiseCommand
         var db = new Option<string?>("--db") { Description = "a squeezing level in dB (10 dB is r = ln(10)/2): added variance, dB and coherent-state fidelity there" };
         var sweep = new Option<string?>("--sweep") { Description = "FROM:TO:STEP in dB: a table of the noise over squeezing levels" };
         var phases = new PathOption("--phases") { Description = "a file of 'NODE t' lines: the Gaussian phase exp(i t q^2/2) before each p measurement (exact; default 0)" };
-        var target = new Option<string?>("--target") { Description = "V: the least squeezing (dB) at which every output quadrature's added variance is at most V vacuum units" };
+        var target = new Option<string?>("--target") { Description = "V: the least squeezing (dB) at which every output quadrature's (with more outputs than inputs: every finite direction's) added variance is at most V vacuum units" };
         var format = OutputFormat.TextOrJson("the report");
         var json = new Option<bool>("--json") { Description = "the same as --format json: one JSON object with the exact matrices (rationals as strings)" };
         var cmd = new Command("noise", "Exact added noise of a continuous-variable flow pattern under finite squeezing; exit 0, 1 if the corrections fail, 2 for bad input")

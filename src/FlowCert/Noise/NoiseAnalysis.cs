@@ -11,8 +11,8 @@ public static class NoiseAnalysis
 {
     /// <summary>
     /// The exact model. Throws <see cref="NoiseInputException"/> for a certificate over another field, a
-    /// proof of absence, a number of outputs different from the number of inputs, or a phase on a node
-    /// that is not measured. A certificate whose corrections fail is not an exception: see
+    /// proof of absence, fewer outputs than inputs (no flow has that), or a phase on a node that is not
+    /// measured. More outputs than inputs are accepted: the noise is then reported on the finite directions. A certificate whose corrections fail is not an exception: see
     /// <see cref="NoiseReport.Valid"/>.
     /// </summary>
     public static NoiseReport Analyze(FlowResult flow, IReadOnlyDictionary<int, Rational>? phases = null)
@@ -23,8 +23,8 @@ public static class NoiseAnalysis
             throw new NoiseInputException($"the certificate is over {flow.Field.Name}, and finite squeezing is a continuous-variable notion: give a certificate over Q.");
         if (!flow.HasFlow)
             throw new NoiseInputException("the certificate proves that no flow exists: there is no pattern whose noise could be computed.");
-        if (g.Inputs.Count != g.Outputs.Count)
-            throw new NoiseInputException($"the graph has {Graphs.Formats.Counted.Of(g.Inputs.Count, "input")} and {Graphs.Formats.Counted.Of(g.Outputs.Count, "output")}: the noise model compares the pattern with a unitary, so it needs as many outputs as inputs.");
+        if (g.Outputs.Count < g.Inputs.Count)
+            throw new NoiseInputException($"the graph has {Graphs.Formats.Counted.Of(g.Inputs.Count, "input")} and {Graphs.Formats.Counted.Of(g.Outputs.Count, "output")}: no flow has fewer outputs than inputs, so this certificate cannot be right.");
         foreach (var (v, _) in phases)
             if (g.Outputs.Contains(v)) throw new NoiseInputException($"{g.Names[v]} is an output and is never measured: it has no measurement phase.");
 
@@ -36,6 +36,7 @@ public static class NoiseAnalysis
 
         var forms = new LinearForms(g.NodeCount);
         foreach (var e in g.Edges) forms.Edge(e.U, e.V, e.Weight);
+        var outcomes = new List<(int V, Rational[] M)>(); // every measured operator M_v, in measurement order
         for (int k = 0; k < flow.Rounds.Count; k++)
         {
             // Nodes of one round are measured together: every measured operator first, then every correction
@@ -46,6 +47,7 @@ public static class NoiseAnalysis
                 if (phases.TryGetValue(v, out var t)) forms.Phase(v, t);
                 measured.Add((v, forms.Copy(LinearForms.P(v))));
             }
+            outcomes.AddRange(measured);
             foreach (var (v, m) in measured)
             {
                 if (!flow.Corrections.TryGetValue(v, out var c)) continue;
@@ -61,7 +63,7 @@ public static class NoiseAnalysis
                     if (w != v && round[w] > k) forms.AddTo(LinearForms.P(w), -acw, m); // Z_w(-m (A c_v)(w))
             }
         }
-        return Read(flow, phases, forms);
+        return Read(flow, phases, forms, outcomes);
     }
 
     /// <summary>The one place a correction coefficient is read: a typed element of Q.</summary>
@@ -79,7 +81,7 @@ public static class NoiseAnalysis
         return list;
     }
 
-    private static NoiseReport Read(FlowResult flow, IReadOnlyDictionary<int, Rational> phases, LinearForms forms)
+    private static NoiseReport Read(FlowResult flow, IReadOnlyDictionary<int, Rational> phases, LinearForms forms, List<(int V, Rational[] M)> outcomes)
     {
         var g = flow.Graph;
         var inputs = g.SortedInputs;
@@ -89,7 +91,6 @@ public static class NoiseAnalysis
         var s = new Rational[rows, 2 * inputs.Length];
         var k = new Rational[rows, squeezed.Length];
         var l = new Rational[rows, squeezed.Length];
-        var leaks = new List<AntiSqueezedLeak>();
         for (int row = 0; row < rows; row++)
         {
             var o = outputs[row / 2];
@@ -103,13 +104,25 @@ public static class NoiseAnalysis
             {
                 k[row, j] = form[LinearForms.Q(squeezed[j])];
                 l[row, j] = form[LinearForms.P(squeezed[j])];
-                if (!k[row, j].IsZero) leaks.Add(new AntiSqueezedLeak(squeezed[j], row, k[row, j]));
             }
         }
+        var measuredK = new Rational[outcomes.Count, squeezed.Length];
+        for (int i = 0; i < outcomes.Count; i++)
+            for (int j = 0; j < squeezed.Length; j++) measuredK[i, j] = outcomes[i].M[LinearForms.Q(squeezed[j])];
+        // As many outputs as inputs: K_M is square and invertible (docs/noise.md), every output quadrature is
+        // a finite direction and the basis is the identity, so directions are rows.
+        var d = outputs.Length == inputs.Length ? FiniteDirections.Identity(rows) : FiniteDirections.Basis(k, measuredK, s);
+        var dk = FiniteDirections.Times(d, k);
+        var leaks = new List<AntiSqueezedLeak>();
+        for (int i = 0; i < dk.GetLength(0); i++)
+            for (int j = 0; j < squeezed.Length; j++)
+                if (!dk[i, j].IsZero) leaks.Add(new AntiSqueezedLeak(squeezed[j], i, dk[i, j]));
         return new NoiseReport
         {
             Flow = flow, Phases = phases, Inputs = inputs, Outputs = outputs, Squeezed = squeezed,
             S = s, K = k, L = l, Leaks = leaks,
+            MeasuredNodes = outcomes.Select(o => o.V).ToArray(), MeasuredK = measuredK,
+            Directions = d, DirectionS = FiniteDirections.Times(d, s), DirectionL = FiniteDirections.Times(d, l), DirectionK = dk,
         };
     }
 }

@@ -23,6 +23,13 @@ public static class NoiseFigures
     public static double AddedVariance(NoiseReport report, int row, double r)
         => ToDouble(report.AddedVariance(row)) * Math.Exp(-2 * r) + ToDouble(report.AntiSqueezedVariance(row)) * Math.Exp(2 * r);
 
+    /// <summary>
+    /// The added variance of finite direction j (the combination f_j^T x_out as written) in vacuum units:
+    /// |(D L)_j|^2 e^(-2r) + |(D K)_j|^2 e^(2r). With as many outputs as inputs this is <see cref="AddedVariance"/>.
+    /// </summary>
+    public static double DirectionAddedVariance(NoiseReport report, int direction, double r)
+        => ToDouble(report.DirectionVariance(direction)) * Math.Exp(-2 * r) + ToDouble(report.DirectionAntiSqueezedVariance(direction)) * Math.Exp(2 * r);
+
     /// <summary>A variance in vacuum units as dB relative to the vacuum: 10 log10(x) (negative below vacuum).</summary>
     public static double RelativeDecibels(double vacuumUnits) => 10 * Math.Log10(vacuumUnits);
 
@@ -49,6 +56,8 @@ public static class NoiseFigures
     /// </summary>
     public static double CoherentStateFidelity(NoiseReport report, double r)
     {
+        if (report.IsEmbedding)
+            throw new InvalidOperationException("the coherent-state fidelity is defined only with as many outputs as inputs (docs/noise.md)");
         var n = AddedCovariance(report, r);
         int rows = report.Rows, cols = report.S.GetLength(1);
         var m = new double[rows, rows];
@@ -63,16 +72,17 @@ public static class NoiseFigures
     }
 
     /// <summary>
-    /// The least squeezing in dB at which every output quadrature's added variance is at most
-    /// <paramref name="vacuumUnits"/> (a multiple of the vacuum variance 1/2): 10 log10(max diag(L L^T) / V),
-    /// and 0 when no squeezing is needed. Null when the corrections fail (K != 0: no level suffices for long).
+    /// The least squeezing in dB at which every finite direction's added variance (with as many outputs as
+    /// inputs: every output quadrature's) is at most <paramref name="vacuumUnits"/> (a multiple of the vacuum
+    /// variance 1/2): 10 log10(max diag((D L)(D L)^T) / V), and 0 when no squeezing is needed. Null when the
+    /// corrections fail (D K != 0: no level suffices for long).
     /// </summary>
     public static double? TargetDecibels(NoiseReport report, Rational vacuumUnits)
     {
         if (!report.Valid) return null;
         var worst = Rational.Zero;
-        for (int row = 0; row < report.Rows; row++)
-            if (report.AddedVariance(row).CompareTo(worst) > 0) worst = report.AddedVariance(row);
+        for (int j = 0; j < report.DirectionCount; j++)
+            if (report.DirectionVariance(j).CompareTo(worst) > 0) worst = report.DirectionVariance(j);
         if (worst.IsZero) return 0;
         return Math.Max(0, 10 * Math.Log10(ToDouble(worst / vacuumUnits)));
     }

@@ -38,9 +38,24 @@ public static class NoiseJson
             ["antiSqueezed"] = Matrix(report.K),
             ["leaks"] = new JArray(report.Leaks.Select(l => new JObject
             {
-                ["node"] = g.Names[l.Node], ["row"] = report.RowName(l.Row), ["coefficient"] = l.Coefficient.ToString(),
+                ["node"] = g.Names[l.Node], [report.IsEmbedding ? "direction" : "row"] = report.DirectionName(l.Row), ["coefficient"] = l.Coefficient.ToString(),
             })),
         };
+        if (report.IsEmbedding)
+        {
+            var directions = Enumerable.Range(0, report.DirectionCount).ToArray();
+            o["finite"] = new JObject
+            {
+                ["directions"] = new JRaw(new JArray(directions.Select(report.DirectionName)).ToString(Formatting.None)),
+                ["kinds"] = new JRaw(new JArray(directions.Select(j => report.IsNullifier(j) ? "nullifier" : "logical")).ToString(Formatting.None)),
+                ["D"] = Matrix(report.Directions),
+                ["DS"] = Matrix(report.DirectionS),
+                ["DL"] = Matrix(report.DirectionL),
+                ["covariance"] = Matrix(report.DirectionCovariance),
+                ["addedVariance"] = new JObject(directions.Select(j => new JProperty(report.DirectionName(j), report.DirectionVariance(j).ToString()))),
+                ["DK"] = Matrix(report.DirectionK),
+            };
+        }
         if (request.Decibels is { } db) o["at"] = Level(report, db);
         if (request.Sweep is { } levels) o["sweep"] = new JArray(levels.Select(level => Level(report, level)));
         if (request.Target is { } target)
@@ -59,9 +74,12 @@ public static class NoiseJson
         {
             ["dB"] = Round(db),
             ["r"] = Round(r),
-            ["addedVarianceVacuumUnits"] = new JObject(Enumerable.Range(0, report.Rows)
-                .Select(row => new JProperty(report.RowName(row), Round(NoiseFigures.AddedVariance(report, row, r))))),
-            ["fidelity"] = Round(NoiseFigures.CoherentStateFidelity(report, r)),
+            ["addedVarianceVacuumUnits"] = report.IsEmbedding
+                ? new JObject(Enumerable.Range(0, report.DirectionCount)
+                    .Select(j => new JProperty(report.DirectionName(j), Round(NoiseFigures.DirectionAddedVariance(report, j, r)))))
+                : new JObject(Enumerable.Range(0, report.Rows)
+                    .Select(row => new JProperty(report.RowName(row), Round(NoiseFigures.AddedVariance(report, row, r))))),
+            ["fidelity"] = report.IsEmbedding ? JValue.CreateNull() : Round(NoiseFigures.CoherentStateFidelity(report, r)),
         };
     }
 

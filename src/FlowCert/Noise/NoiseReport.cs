@@ -4,11 +4,13 @@ using FlowCert.Flows;
 namespace FlowCert.Noise;
 
 /// <summary>
-/// An anti-squeezed quadrature q_u^0 that reaches an output: the corrections do not cancel it, so the
-/// certificate's pattern is not deterministic and its noise grows as e^(2r).
+/// An anti-squeezed quadrature q_u^0 that reaches a finite direction of the outputs (with as many outputs as
+/// inputs: any output quadrature): the corrections do not cancel it, so the certificate's pattern is not
+/// deterministic and its noise grows as e^(2r).
 /// </summary>
 /// <param name="Node">The non-input u whose anti-squeezed q_u^0 appears.</param>
-/// <param name="Row">The output quadrature it reaches (row index: 2k is q, 2k + 1 is p of the k-th output).</param>
+/// <param name="Row">The finite direction it reaches (a row of <see cref="NoiseReport.Directions"/>; with as many
+/// outputs as inputs the directions are the output quadratures: 2k is q, 2k + 1 is p of the k-th output).</param>
 /// <param name="Coefficient">Its exact coefficient there.</param>
 public sealed record AntiSqueezedLeak(int Node, int Row, Rational Coefficient);
 
@@ -16,7 +18,9 @@ public sealed record AntiSqueezedLeak(int Node, int Row, Rational Coefficient);
 /// The exact finite-squeezing model of a Gaussian flow pattern over Q (docs/noise.md). Every output
 /// quadrature is x_out = S x_in + K q^0 + L delta, with x_in the inputs' quadratures (q, p per input),
 /// q^0 the non-inputs' anti-squeezed and delta their squeezed quadratures. Rows: (q, p) of each output
-/// in <see cref="Outputs"/> order. A valid flow has K = 0; the added covariance is then (e^(-2r)/2) L L^T.
+/// in <see cref="Outputs"/> order. With as many outputs as inputs a valid flow has K = 0 and the added
+/// covariance is (e^(-2r)/2) L L^T. With more outputs than inputs K is not zero: the noise is read on the
+/// finite directions D (f^T K = 0 for every row f of D when the flow is valid), as (e^(-2r)/2) (D L)(D L)^T.
 /// </summary>
 public sealed record NoiseReport
 {
@@ -36,11 +40,52 @@ public sealed record NoiseReport
     public required Rational[,] K { get; init; }
     /// <summary>Coefficients of the squeezed delta_u = p_u^0, 2|O| x |squeezed|.</summary>
     public required Rational[,] L { get; init; }
-    /// <summary>Every non-zero entry of <see cref="K"/>, row by row.</summary>
+    /// <summary>Every non-zero entry of <see cref="DirectionK"/> (with as many outputs as inputs: of K), row by row.</summary>
     public required IReadOnlyList<AntiSqueezedLeak> Leaks { get; init; }
+    /// <summary>The measured nodes in measurement order: rows of <see cref="MeasuredK"/>.</summary>
+    public required IReadOnlyList<int> MeasuredNodes { get; init; }
+    /// <summary>K_M: the coefficients of the anti-squeezed q_u^0 in each measured outcome M_v, |M| x |squeezed|.</summary>
+    public required Rational[,] MeasuredK { get; init; }
+    /// <summary>
+    /// The finite directions D, one per row over the 2|O| output quadratures: the identity with as many outputs
+    /// as inputs; otherwise the canonical basis of F = { f : f^T K in the row space of K_M } (logical directions
+    /// first, then nullifiers; docs/noise.md). F does not depend on the corrections.
+    /// </summary>
+    public required Rational[,] Directions { get; init; }
+    /// <summary>D S: the ideal value of each finite direction (a unit row for a logical direction, 0 for a nullifier).</summary>
+    public required Rational[,] DirectionS { get; init; }
+    /// <summary>D L: the squeezed noise of each finite direction.</summary>
+    public required Rational[,] DirectionL { get; init; }
+    /// <summary>D K: zero for a valid flow.</summary>
+    public required Rational[,] DirectionK { get; init; }
 
-    /// <summary>True when no anti-squeezed quadrature reaches an output (the corrections work).</summary>
+    /// <summary>True when no anti-squeezed quadrature reaches a finite direction (the corrections work).</summary>
     public bool Valid => Leaks.Count == 0;
+
+    /// <summary>True with more outputs than inputs: the ideal output embeds the inputs in more modes.</summary>
+    public bool IsEmbedding => Outputs.Count > Inputs.Count;
+
+    /// <summary>The number of finite directions (2|O| with as many outputs as inputs, |O| + |I| for a valid flow).</summary>
+    public int DirectionCount => Directions.GetLength(0);
+
+    /// <summary>True when direction j is a nullifier: its ideal value D S is 0.</summary>
+    public bool IsNullifier(int j)
+    {
+        for (int c = 0; c < DirectionS.GetLength(1); c++) if (!DirectionS[j, c].IsZero) return false;
+        return true;
+    }
+
+    /// <summary>The name of direction j: the output row's name ("out q") with as many outputs as inputs, else "f1", "f2", ...</summary>
+    public string DirectionName(int j) => IsEmbedding ? $"f{j + 1}" : RowName(j);
+
+    /// <summary>The added variance of direction j over e^(-2r)/2: |(D L)_j|^2 (exact).</summary>
+    public Rational DirectionVariance(int j) => RowNorm(DirectionL, j);
+
+    /// <summary>|(D K)_j|^2: the anti-squeezed variance of direction j over e^(2r)/2 (zero for a valid flow).</summary>
+    public Rational DirectionAntiSqueezedVariance(int j) => RowNorm(DirectionK, j);
+
+    /// <summary>(D L)(D L)^T: the added covariance of the finite directions over e^(-2r)/2.</summary>
+    public Rational[,] DirectionCovariance => Gram(DirectionL);
 
     /// <summary>The number of output quadratures, 2|O|.</summary>
     public int Rows => 2 * Outputs.Count;

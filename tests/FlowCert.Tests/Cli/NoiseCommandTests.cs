@@ -142,5 +142,90 @@ public class NoiseCommandTests
         Assert.Equal(NoiseFigures.SqueezingParameter(10), (double)json["at"]!["r"]!, 9);
     }
 
+    // More outputs than inputs (docs/noise.md): the README's fan-out example, generated, solved twice and analysed.
+    private static (string General, string Causal) FanOut(Workspace w)
+    {
+        var graph = w.PathOf("fan-out.ograph");
+        Assert.Equal(0, Run("generate", "random", "--size", "7", "--probability", "1/3", "--input-count", "1", "--output-count", "3", "--seed", "8", "--out", graph).Code);
+        Assert.Equal(0, Run("solve", graph, "--out", w.PathOf("fan-out.Q.general.json")).Code);
+        Assert.Equal(0, Run("solve", graph, "--flow", "causal", "--out", w.PathOf("fan-out.Q.causal.json")).Code);
+        return (w.PathOf("fan-out.Q.general.json"), w.PathOf("fan-out.Q.causal.json"));
+    }
+
+    [Fact]
+    public void MoreOutputsThanInputsReportTheFiniteDirections()
+    {
+        using var w = new Workspace();
+        var (general, causal) = FanOut(w);
+        var (code, o, e) = Run("noise", general, "--db", "10", "--target", "1/2");
+        Assert.True(code == 0, e);
+        Assert.Contains("generalized flow over Q, depth 2", o);
+        Assert.Contains("4 finite directions (2 logical, 2 nullifiers) and 2 anti-squeezed", o);
+        Assert.Contains("f2 = -q_v5 - q_v6: logical, ideal value p_v0; 0 e^(-2r)/2", o);
+        Assert.Contains("f4 = p_v4 + 2 q_v5 + p_v5 - p_v6: nullifier, ideal value 0; 9 e^(-2r)/2", o);
+        Assert.Contains("f4: added variance 0.9 vacuum units", o);
+        Assert.Contains("fidelity for coherent-state inputs: not defined with more outputs than inputs", o);
+        // The worst direction has 9 e^(-2r)/2 = 9 e^(-2r) vacuum units / 2... i.e. 9 e^(-2r) <= 1/2: 10 log10(18) dB.
+        Assert.Contains($"needs at least {(10 * Math.Log10(18)).ToString("0.00", CultureInfo.InvariantCulture)} dB", o);
+        // The causal certificate has depth 4 and other anti-squeezed parts, and the same finite directions.
+        var other = Run("noise", causal, "--db", "10");
+        Assert.Equal(0, other.Code);
+        Assert.Contains("causal flow over Q, depth 4", other.Out);
+        string Finite(string text) => text[text.IndexOf("finite directions f")..text.IndexOf("anti-squeezed parts")];
+        string AntiSqueezed(string text) => text[text.IndexOf("anti-squeezed parts")..text.IndexOf("at 10 dB")];
+        Assert.Equal(Finite(o), Finite(other.Out));
+        Assert.NotEqual(AntiSqueezed(o), AntiSqueezed(other.Out));
+    }
+
+    [Fact]
+    public void MoreOutputsThanInputsHaveTheFiniteDirectionsInJson()
+    {
+        using var w = new Workspace();
+        var (general, _) = FanOut(w);
+        var (code, o, _) = Run("noise", general, "--json", "--sweep", "0:10:5");
+        Assert.Equal(0, code);
+        var json = JObject.Parse(o);
+        var finite = (JObject)json["finite"]!;
+        Assert.Equal(["directions", "kinds", "D", "DS", "DL", "covariance", "addedVariance", "DK"], finite.Properties().Select(p => p.Name));
+        Assert.Equal(["logical", "logical", "nullifier", "nullifier"], finite["kinds"]!.Select(k => (string)k!));
+        var d = Matrix(finite["D"]!);
+        var dl = Matrix(finite["DL"]!);
+        var l = Matrix(json["L"]!);
+        // DL = D L and DK = 0, in exact rationals read back from the strings.
+        for (int i = 0; i < d.Length; i++)
+            for (int j = 0; j < l[0].Length; j++)
+            {
+                var sum = Rational.Zero;
+                for (int k = 0; k < l.Length; k++) sum += d[i][k] * l[k][j];
+                Assert.Equal(sum, dl[i][j]);
+            }
+        Assert.All(Matrix(finite["DK"]!).SelectMany(x => x), x => Assert.True(x.IsZero));
+        var levels = (JArray)json["sweep"]!;
+        Assert.Equal(3, levels.Count);
+        Assert.All(levels, level => Assert.Equal(JTokenType.Null, level["fidelity"]!.Type));
+        Assert.Equal(["f1", "f2", "f3", "f4"], ((JObject)levels[0]["addedVarianceVacuumUnits"]!).Properties().Select(p => p.Name));
+    }
+
+    // The negative control with more outputs than inputs: a corrupted correction exits 1 and names the node.
+    [Fact]
+    public void MoreOutputsThanInputsWithACorruptedCorrectionExitOne()
+    {
+        using var w = new Workspace();
+        var (general, _) = FanOut(w);
+        var flow = CertificateReader.ReadFile(general);
+        var corrupted = FlowCert.Tests.Noise.NegativeControlTests.Corrupt(flow)!;
+        Assert.False(FlowCert.Tests.Noise.EmbeddingTests.IsGeneralizedFlow(corrupted));
+        var bad = w.Write("bad.json", CertificateWriter.Write(corrupted));
+        var (code, o, _) = Run("noise", bad, "--target", "1");
+        Assert.Equal(1, code);
+        Assert.Matches(@"invalid: the anti-squeezed quadrature q of v\d reaches f\d = .*, a direction the measurements leave finite", o);
+        Assert.Contains("target: no squeezing level meets 1 vacuum units", o);
+        var json = JObject.Parse(Run("noise", bad, "--json").Out);
+        Assert.False((bool)json["valid"]!);
+        Assert.StartsWith("f", (string)json["leaks"]![0]!["direction"]!);
+    }
+
+    private static Rational[][] Matrix(JToken m) => m.Select(row => row.Select(x => Parse((string)x!)).ToArray()).ToArray();
+
     private static Rational Parse(string text) => Rational.TryParse(text, out var r) ? r : throw new FormatException(text);
 }

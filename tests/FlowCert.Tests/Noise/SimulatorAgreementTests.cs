@@ -52,6 +52,70 @@ public class SimulatorAgreementTests(ITestOutputHelper output)
         Assert.Equal(at10, resolvedAt10);
     }
 
+    // More outputs than inputs (docs/noise.md): along every reported finite direction f the sampled
+    // outcome-averaged variance is f^T S V_in S^T f + (e^(-2r)/2) |f^T L|^2, and every output quadrature with
+    // an anti-squeezed part has (e^(2r)/2) |K_row|^2 on top, at every level: it grows as e^(2r).
+    [Fact]
+    public void SimulatorMatchesTheFiniteDirectionsWithMoreOutputsThanInputs()
+    {
+        var corpus = QCertificateCorpus.Certificates(40, seed: 1314, moreOutputs: 2);
+        int directions = 0, withNoise = 0, resolved = 0, antiSqueezedRows = 0;
+        for (int c = 0; c < corpus.Count; c++)
+        {
+            var (name, flow, phases) = corpus[c];
+            var report = NoiseAnalysis.Analyze(flow, phases);
+            Assert.True(report.Valid, name);
+            double r = Levels[c % Levels.Length];
+            // The whole output covariance, with its e^(2r) part, as for the square case.
+            Assert.True(Compare(report, phases, r, new Random(c), name).Agrees, name);
+            var run = Sample(report, phases, r, new Random(1000 + c));
+            var d = Matrix<double>.Build.DenseOfArray(ToDoubles(report.Directions));
+            var dl = Matrix<double>.Build.DenseOfArray(ToDoubles(report.DirectionL));
+            var ideal = d * run.S * run.InputCovariance * run.S.Transpose() * d.Transpose();
+            var exact = ideal + dl * dl.Transpose() * (Math.Exp(-2 * r) / 2);
+            var plain = d * (run.Conditional + run.Spread) * d.Transpose();
+            var spread = d * run.Spread * d.Transpose();
+            var cv = d * run.ControlVariate * d.Transpose();
+            double scale = 1 + exact.Enumerate().Select(Math.Abs).Max();
+            double full = 1 + (run.S * run.InputCovariance * run.S.Transpose()).Enumerate().Select(Math.Abs).Max() + Math.Exp(2 * r) * report.Rows;
+            for (int i = 0; i < report.DirectionCount; i++)
+            {
+                directions++;
+                // Plain estimate within 6 standard errors of a sample variance; control variate to rounding of the
+                // full (anti-squeezed) covariance it is projected from.
+                double tolerance = 6 * Math.Sqrt(2 * spread[i, i] * spread[i, i] / Samples) + 1e-9 * full;
+                Assert.True(Math.Abs(plain[i, i] - exact[i, i]) <= tolerance, $"{name} {report.DirectionName(i)}: plain {plain[i, i]} exact {exact[i, i]}");
+                Assert.True(Math.Abs(cv[i, i] - exact[i, i]) <= 1e-9 * full, $"{name} {report.DirectionName(i)}: cv {cv[i, i]} exact {exact[i, i]}");
+                if (report.DirectionVariance(i).IsZero) continue;
+                withNoise++;
+                if (Math.Abs(cv[i, i] - ideal[i, i]) > 1e-5 * scale) resolved++;
+                else output.WriteLine($"{name} {report.DirectionName(i)}: the added noise {exact[i, i] - ideal[i, i]:G3} is not resolved");
+            }
+            var finite = run.S * run.InputCovariance * run.S.Transpose()
+                + Matrix<double>.Build.DenseOfArray(ToDoubles(report.Covariance)) * (Math.Exp(-2 * r) / 2);
+            for (int row = 0; row < report.Rows; row++)
+            {
+                if (report.AntiSqueezedVariance(row).IsZero) continue;
+                antiSqueezedRows++;
+                double measured = (run.ControlVariate[row, row] - finite[row, row]) / (Math.Exp(2 * r) / 2);
+                Assert.Equal(NoiseFigures.ToDouble(report.AntiSqueezedVariance(row)), measured, 6);
+            }
+        }
+        output.WriteLine($"{corpus.Count} certificates, {directions} finite directions, {withNoise} with added noise, {resolved} of them where dropping D L would be detected, {antiSqueezedRows} anti-squeezed output quadratures");
+        // The comparison has teeth: leaving the added noise out is detected on every direction that has any.
+        Assert.Equal(withNoise, resolved);
+        Assert.True(withNoise >= directions / 2, $"{withNoise} of {directions}");
+        Assert.True(antiSqueezedRows >= corpus.Count);
+    }
+
+    private static double[,] ToDoubles(Rational[,] m)
+    {
+        var d = new double[m.GetLength(0), m.GetLength(1)];
+        for (int i = 0; i < m.GetLength(0); i++)
+            for (int j = 0; j < m.GetLength(1); j++) d[i, j] = NoiseFigures.ToDouble(m[i, j]);
+        return d;
+    }
+
     [Fact]
     public void SimulatorSeesTheAntiSqueezedNoiseOfACorruptedCertificate()
     {
@@ -78,25 +142,9 @@ public class SimulatorAgreementTests(ITestOutputHelper output)
     /// </summary>
     private static (bool Agrees, bool WithoutNoiseFails) Compare(NoiseReport report, IReadOnlyDictionary<int, Rational> phases, double r, Random random, string name)
     {
-        int k = report.Inputs.Count;
-        var (inMean, inCov) = RandomInputState(k, random);
-        var sim = new GaussianPatternSimulator(report.Flow, r, phases.ToDictionary(p => p.Key, p => ToDouble(p.Value)));
+        var run = Sample(report, phases, r, random);
+        var (s, inMean, inCov, average, spread, conditional) = (run.S, run.InputMean, run.InputCovariance, run.Average, run.Spread, run.Conditional);
         int rows = report.Rows;
-        var means = new List<Vector<double>>();
-        var innovations = new List<double[]>();
-        var conditional = Matrix<double>.Build.Dense(rows, rows);
-        for (int sample = 0; sample < Samples; sample++)
-        {
-            var (m, cov, z) = sim.Run(inMean, inCov, random);
-            means.Add(m);
-            innovations.Add(z);
-            conditional += cov / Samples;
-        }
-        var average = means.Aggregate(Vector<double>.Build.Dense(rows), (a, b) => a + b) / Samples;
-        var spread = Matrix<double>.Build.Dense(rows, rows);
-        foreach (var m in means) spread += (m - average).OuterProduct(m - average) / (Samples - 1);
-
-        var s = Matrix<double>.Build.Dense(rows, 2 * k, (i, j) => ToDouble(report.S[i, j]));
         var ideal = s * inCov * s.Transpose();
         var exact = ideal + Matrix<double>.Build.DenseOfArray(NoiseFigures.AddedCovariance(report, r));
         var exactMean = s * inMean;
@@ -113,15 +161,8 @@ public class SimulatorAgreementTests(ITestOutputHelper output)
             }
         }
 
-        // (2) Control variate: least squares of the means on [1, z].
-        int d = innovations[0].Length;
-        var x = Matrix<double>.Build.Dense(Samples, d + 1, (n, c) => c == 0 ? 1 : innovations[n][c - 1]);
-        var y = Matrix<double>.Build.Dense(Samples, rows, (n, c) => means[n][c]);
-        var coefficients = x.QR().Solve(y); // (d + 1) x rows
-        var residual = (x * coefficients - y).Enumerate().Select(Math.Abs).DefaultIfEmpty(0).Max();
-        var b = coefficients.SubMatrix(1, d, 0, rows);
-        var cvMean = coefficients.Row(0);
-        var cvTotal = conditional + b.TransposeThisAndMultiply(b);
+        // (2) Control variate (see Sample).
+        var (cvMean, cvTotal, residual) = (run.ControlVariateMean, run.ControlVariate, run.Residual);
         double scale = 1 + exact.Enumerate().Select(Math.Abs).Max();
         if (residual > 1e-8 * scale * 100) agrees = false;
         bool withoutNoiseFails = false;
@@ -139,9 +180,49 @@ public class SimulatorAgreementTests(ITestOutputHelper output)
         return (agrees, withoutNoiseFails);
     }
 
+    /// <summary>The moments of one certificate's simulated outputs over <see cref="Samples"/> runs.</summary>
+    internal sealed record Moments(Matrix<double> S, Vector<double> InputMean, Matrix<double> InputCovariance, Vector<double> Average,
+        Matrix<double> Spread, Matrix<double> Conditional, Vector<double> ControlVariateMean, Matrix<double> ControlVariate, double Residual);
+
+    /// <summary>
+    /// Runs the simulator <see cref="Samples"/> times on a random input state: the sample mean and spread of the
+    /// conditional means, the mean conditional covariance, and the control-variate estimate, which regresses
+    /// the conditional means on [1, z] by least squares (mean: the intercept; spread: B^T B of the slopes B).
+    /// </summary>
+    internal static Moments Sample(NoiseReport report, IReadOnlyDictionary<int, Rational> phases, double r, Random random)
+    {
+        int k = report.Inputs.Count;
+        var (inMean, inCov) = RandomInputState(k, random);
+        var sim = new GaussianPatternSimulator(report.Flow, r, phases.ToDictionary(p => p.Key, p => ToDouble(p.Value)));
+        int rows = report.Rows;
+        var means = new List<Vector<double>>();
+        var innovations = new List<double[]>();
+        var conditional = Matrix<double>.Build.Dense(rows, rows);
+        for (int sample = 0; sample < Samples; sample++)
+        {
+            var (m, cov, z) = sim.Run(inMean, inCov, random);
+            means.Add(m);
+            innovations.Add(z);
+            conditional += cov / Samples;
+        }
+        var average = means.Aggregate(Vector<double>.Build.Dense(rows), (a, b) => a + b) / Samples;
+        var spread = Matrix<double>.Build.Dense(rows, rows);
+        foreach (var m in means) spread += (m - average).OuterProduct(m - average) / (Samples - 1);
+        var s = Matrix<double>.Build.Dense(rows, Math.Max(2 * k, 2), (i, j) => j < 2 * k ? ToDouble(report.S[i, j]) : 0);
+        int d = innovations[0].Length;
+        var x = Matrix<double>.Build.Dense(Samples, d + 1, (n, c) => c == 0 ? 1 : innovations[n][c - 1]);
+        var y = Matrix<double>.Build.Dense(Samples, rows, (n, c) => means[n][c]);
+        var coefficients = x.QR().Solve(y); // (d + 1) x rows
+        var residual = (x * coefficients - y).Enumerate().Select(Math.Abs).DefaultIfEmpty(0).Max();
+        var b = coefficients.SubMatrix(1, d, 0, rows);
+        return new Moments(s, inMean, inCov, average, spread, conditional, coefficients.Row(0), conditional + b.TransposeThisAndMultiply(b), residual);
+    }
+
     /// <summary>A random input state: thermal-like diagonal covariance (each nu >= 1) through random symplectic shears.</summary>
     private static (Vector<double>, Matrix<double>) RandomInputState(int modes, Random random)
     {
+        // No input: a placeholder mode that no node reads (the S of the report is padded with zero columns).
+        if (modes == 0) return (Vector<double>.Build.Dense(2), Matrix<double>.Build.Dense(2, 2));
         var mean = Vector<double>.Build.Dense(2 * modes, _ => Normal.Sample(random, 0, 1));
         var d = Matrix<double>.Build.Dense(2 * modes, 2 * modes);
         for (int i = 0; i < modes; i++)
