@@ -35,10 +35,13 @@ internal sealed class FieldGraph<T, TField> where T : struct where TField : stru
         var mapped = new T[graph.Edges.Count];
         var kept = new bool[graph.Edges.Count];
         var vanished = new List<WeightedEdge>();
+        Rational lastWeight = default;
+        T lastMapped = field.Zero;
         for (int k = 0; k < graph.Edges.Count; k++)
         {
             var e = graph.Edges[k];
-            try { mapped[k] = field.FromRational(e.Weight); }
+            if (k > 0 && e.Weight.Equals(lastWeight)) mapped[k] = lastMapped; // runs of one weight (often all 1) map once
+            else try { mapped[k] = lastMapped = field.FromRational(lastWeight = e.Weight); }
             catch (NotInFieldException)
             {
                 throw new WeightNotInFieldException(
