@@ -23,7 +23,12 @@ public static class Workloads
     /// inputs and the last bandwidth nodes outputs. Its flow has about n / bandwidth - 1 layers, each found
     /// on a dense bandwidth x bandwidth block (triangular with a full anti-diagonal, so of full rank).
     /// </summary>
-    public static OpenGraph Band(int n, int bandwidth)
+    /// <summary>
+    /// The random band graph; with <paramref name="hub"/>, one more output joined to every node of the band.
+    /// The hub never corrects anything (the band's corrections stay valid), but it keeps every unprocessed
+    /// node on the frontier of every layer: the family where each layer's block spans all unprocessed rows.
+    /// </summary>
+    public static OpenGraph Band(int n, int bandwidth, bool hub = false)
     {
         var names = Enumerable.Range(0, n).Select(i => "v" + i.ToString("D5", System.Globalization.CultureInfo.InvariantCulture)).ToArray();
         var rng = new Random(11);
@@ -31,7 +36,9 @@ public static class Workloads
         for (int i = 0; i < n; i++)
             for (int j = i + 1; j <= Math.Min(n - 1, i + bandwidth); j++)
                 if (j == i + bandwidth || rng.Next(2) == 1) edges.Add((names[i], names[j], Rational.One));
-        return new OpenGraph(names, edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth));
+        if (!hub) return new OpenGraph(names, edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth));
+        edges.AddRange(names.Select(v => ("hub", v, Rational.One)));
+        return new OpenGraph(names.Append("hub"), edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth).Append("hub"));
     }
 
     public static FieldSpec Field(string name) => FieldSpec.Parse(name);

@@ -33,14 +33,19 @@ internal static class MultiModularElimination
         }
     }
 
+    private const int LargeBlock = 64;
+
     /// <summary>
-    /// True when the block is dense enough for this kernel: the word-sized test of the F_p kernel and at
-    /// least a third of the m x n entries non-zero. Sparser blocks (such as the triangular blocks of a band
-    /// graph) keep their structure under exact elimination, which then beats this kernel (bench/layers).
+    /// True when the block is dense enough for this kernel: the word-sized test of the F_p kernel, and
+    /// either at least <see cref="LargeBlock"/> rows or a third of the m x n entries non-zero. Small sparser
+    /// blocks (such as the triangular blocks of a band graph of width 32) keep their structure under exact
+    /// elimination, which then beats this kernel; from about 64 rows on, exact numbers grow with the rank
+    /// and this kernel wins even on triangular blocks (bench/layers, width n/8).
     /// </summary>
     public static bool PaysOff(IReadOnlyList<SparseVector<Rational>> rows)
     {
         if (!ModularElimination.PaysOff(rows)) return false;
+        if (rows.Count >= LargeBlock) return true;
         long entries = 0;
         foreach (var r in rows) entries += r.Count;
         return 3 * entries >= (long)rows.Count * EchelonTransform<Rational>.ColumnIndexOf(rows).Ids.Length;
