@@ -76,7 +76,7 @@ public static class SimulateCommand
             {
                 int p = (int)result.Field.Prime;
                 given = request.Angles is null ? new MeasurementAngles(p, new Dictionary<int, double[]>())
-                    : MeasurementAngles.Parse(InputText.ReadAll(request.Angles), request.Angles, result.Graph, p);
+                    : MeasurementAngles.Read(request.Angles, result.Graph, p);
                 double rows = Math.Pow(p, result.Graph.Outputs.Count), columns = Math.Pow(p, result.Graph.Inputs.Count);
                 if (request.Map && request.Out is null && rows * columns > MaxPrintedEntries)
                     throw new UserInputException($"the map has {rows:0} x {columns:0} entries, too many to print: write it as JSON with --out FILE");
