@@ -18,7 +18,10 @@ public static class PrimesReport
 
     /// <summary>Verdict and depth in words: "flow, depth 3" or "no flow (blocked 4 nodes)".</summary>
     public static string Verdict(FlowResult r)
-        => r.HasFlow ? $"flow, depth {r.Depth}" : $"no flow (blocked {Counted.Of(r.Obstruction!.Nodes.Count, "node")})";
+        => FlowOrNot(r.HasFlow, r.Depth) + (r.HasFlow ? "" : $" (blocked {Counted.Of(r.Obstruction!.Nodes.Count, "node")})");
+
+    // The one wording of a verdict and its depth: "flow, depth 3" or "no flow".
+    private static string FlowOrNot(bool hasFlow, int depth) => hasFlow ? $"flow, depth {depth}" : "no flow";
 
     /// <summary>The short human table.</summary>
     public static void WriteTable(TextWriter o, string source, PrimeSurvey s, AuditResult? audit, IReadOnlyList<string> written)
@@ -75,12 +78,12 @@ public static class PrimesReport
         => edges.Count <= MaxEdgesShown ? VanishingEdges.Describe(g, edges)
             : $"{VanishingEdges.Describe(g, edges.Take(MaxEdgesShown).ToList())}, ... ({edges.Count} in all)";
 
-    private static string Short(FlowResult r) => r.HasFlow ? $"flow, depth {r.Depth}" : "no flow";
+    private static string Short(FlowResult r) => FlowOrNot(r.HasFlow, r.Depth);
 
     private static bool SameAsQ(FlowResult r, FlowResult q) => r.HasFlow == q.HasFlow && (!r.HasFlow || r.Depth == q.Depth);
 
     private static string ClaimText(PrimeClaim c)
-        => !c.Defined ? "undefined" : c.HasFlow ? $"flow, depth {c.Depth}" : "no flow";
+        => !c.Defined ? "undefined" : FlowOrNot(c.HasFlow, c.Depth);
 
     /// <summary>One JSON object: the Q answer, the exceptional primes with their answers, the integers, the unclassified part.</summary>
     public static void WriteJson(TextWriter stdout, string source, PrimeSurvey s, AuditResult? audit, IReadOnlyList<string> written)
