@@ -68,7 +68,7 @@ public static class PrimesReport
                 ? $"audit     every prime up to {audit.UpTo} solved directly ({Counted.Of(audit.PrimesSolved, "prime")}{(audit.PrimesUnclassified > 0 ? $", {audit.PrimesUnclassified} without a claim" : "")}): all agree with the claim"
                 : $"audit     {Counted.Of(audit.Disagreements.Count, "DISAGREEMENT")} up to {audit.UpTo}: a bug in flowcert, please report it with the graph");
             foreach (var d in audit.Disagreements)
-                o.WriteLine($"          p = {d.Claim.Prime}: claimed {ClaimText(d.Claim)}, solved {(d.Direct.Result is { } r ? Verdict(r) : "undefined")}");
+                o.WriteLine($"          p = {d.Claim.Prime}: claimed {ClaimText(d.Claim)}, solved {DirectText(d.Direct)}");
         }
         if (written.Count > 0) o.WriteLine($"certificates {written.Count} written: {string.Join(" ", written.Select(f => Escaped.Of(Path.GetFileName(f))))} in {Escaped.Of(Path.GetDirectoryName(written[0]) ?? "")}");
     }
@@ -81,6 +81,8 @@ public static class PrimesReport
     private static string Short(FlowResult r) => FlowOrNot(r.HasFlow, r.Depth);
 
     private static bool SameAsQ(FlowResult r, FlowResult q) => r.HasFlow == q.HasFlow && (!r.HasFlow || r.Depth == q.Depth);
+
+    private static string DirectText(PrimeAnswer a) => a.Result is { } r ? Verdict(r) : "undefined";
 
     private static string ClaimText(PrimeClaim c)
         => !c.Defined ? "undefined" : FlowOrNot(c.HasFlow, c.Depth);
@@ -112,8 +114,7 @@ public static class PrimesReport
         w.WritePropertyName("otherPrimes");
         w.WriteStartObject();
         w.WritePropertyName("sameAsRational"); w.WriteValue(true);
-        w.WritePropertyName("verdict"); w.WriteValue(s.Rational.HasFlow ? "flow" : "noflow");
-        w.WritePropertyName("depth"); if (s.Rational.HasFlow) w.WriteValue(s.Rational.Depth); else w.WriteNull();
+        Summary.WriteVerdictJson(w, s.Rational);
         w.WriteEndObject();
         w.WritePropertyName("complete"); w.WriteValue(s.IsComplete);
         w.WritePropertyName("integers");
@@ -156,7 +157,7 @@ public static class PrimesReport
                 w.WriteStartObject();
                 w.WritePropertyName("prime"); w.WriteValue(d.Claim.Prime);
                 w.WritePropertyName("claim"); w.WriteValue(ClaimText(d.Claim));
-                w.WritePropertyName("direct"); w.WriteValue(d.Direct.Result is { } r ? Verdict(r) : "undefined");
+                w.WritePropertyName("direct"); w.WriteValue(DirectText(d.Direct));
                 w.WriteEndObject();
             }
             w.WriteEndArray();
@@ -184,8 +185,7 @@ public static class PrimesReport
     {
         w.WriteStartObject();
         w.WritePropertyName("field"); w.WriteValue(r.Field.Name);
-        w.WritePropertyName("verdict"); w.WriteValue(r.HasFlow ? "flow" : "noflow");
-        w.WritePropertyName("depth"); if (r.HasFlow) w.WriteValue(r.Depth); else w.WriteNull();
+        Summary.WriteVerdictJson(w, r);
         w.WritePropertyName("blocked"); if (r.Obstruction is { } b) { w.WriteStartArray(); foreach (var v in b.Nodes) w.WriteValue(g.Names[v]); w.WriteEndArray(); } else w.WriteNull();
         w.WritePropertyName("vanishedEdges"); Edges(w, g, r.VanishedEdges);
         w.WriteEndObject();
