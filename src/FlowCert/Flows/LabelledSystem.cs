@@ -13,7 +13,7 @@ namespace FlowCert.Flows;
 /// <item>v's self row when v is labelled XZ, YZ or Z: x_v = 1 (an all-zero row when v is an input).</item>
 /// </list>
 /// Its solutions are exactly the correction sets p(v) allowed when every node outside U is later than v
-/// and no node of U is. The system is eliminated once, by the shared F_2 kernel (<see cref="Elimination"/>),
+/// and no node of U is. The system is eliminated once, by the shared F_2 kernel (<see cref="BitElimination"/>),
 /// as the block [[M, b], [0, 1]]: its rows in reverse order after a first row t = (0 ... 0 1), so that
 /// the canonical solution of B c = e_t is (x, 1) with x the solution of M x = b whose free unknowns are
 /// zero, and the left-kernel vectors with y_t = 1 are the witnesses y^T M = 0, y^T b = 1.
@@ -66,7 +66,9 @@ internal sealed class LabelledSystem
             if (self || (u == v && lv != MeasurementLabel.YZ)) entries.Add(z);
             block[m - r] = new SparseVector<ulong>(entries.ToArray(), entries.Select(_ => 1UL).ToArray());
         }
-        elimination = Elimination.Run(default(BinaryField), block);
+        // The packed kernel itself rather than the field's choice: its left kernel is in reduced echelon
+        // form (BitElimination.Run), which Witness reads the published witness from.
+        elimination = BitElimination.Run(block);
     }
 
     /// <summary>The correction set p(v) (sorted nodes): the solution whose free unknowns are zero; null when there is none.</summary>
@@ -76,19 +78,18 @@ internal sealed class LabelledSystem
             : null;
 
     /// <summary>
-    /// A witness y with y^T M = 0 and y^T b = 1 (flows.md 9.5); null when the system is solvable. Of the
-    /// reduced echelon basis of the block's left kernel (unique, whichever kernel computed it) the vector
-    /// with y_t = 1: the row combination that Gauss-Jordan elimination of [M | b] with pivots taken column
-    /// by column, first row first, reduces to 0 = 1 first.
+    /// A witness y with y^T M = 0 and y^T b = 1 (flows.md 9.5); null when the system is solvable. It is the
+    /// vector of the reduced echelon basis of the block's left kernel with y_t = 1 (the only one with an
+    /// entry at t, its first column): the row combination that Gauss-Jordan elimination of [M | b], pivots
+    /// taken column by column and the first free row with a one as pivot, reduces to 0 = 1 first.
     /// </summary>
     public RowWitness? Witness()
     {
-        var reduced = new SparseElimination<ulong, BinaryField>(default, elimination.LeftKernel()).ReducedRows();
-        if (reduced.Count == 0 || reduced[0].Indices[0] != 0) return null;
+        if (elimination.LeftKernel().FirstOrDefault(y => y.Indices[0] == 0) is not { Indices: not null } witness) return null;
         int m = Rows.Length;
         var rows = new List<int>();
         bool self = false;
-        foreach (var r in reduced[0].Indices.Where(id => id > 0).Select(id => m - id).Order())
+        foreach (var r in witness.Indices.Skip(1).Select(id => m - id).Order())
             if (Rows[r].Self) self = true; else rows.Add(Rows[r].Node);
         return new RowWitness(Node, rows, self);
     }
