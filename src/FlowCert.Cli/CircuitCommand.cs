@@ -38,7 +38,7 @@ public static class CircuitCommand
         {
             MeasurementAngles? angles = null;
             if (anglesPath is not null && !result.Field.IsRationals && result.Field.Prime <= int.MaxValue)
-                angles = MeasurementAngles.Parse(InputText.ReadAll(anglesPath), anglesPath, result.Graph, (int)result.Field.Prime);
+                angles = MeasurementAngles.Read(anglesPath, result.Graph, (int)result.Field.Prime);
             text = writer(CausalCircuit.Extract(result, angles));
         }
         catch (CircuitException e) { throw new UserInputException($"{certPath}: {e.Message}"); }

@@ -38,7 +38,7 @@ public static class NoiseCommand
                 dbText is null ? null : Level(dbText, "--db"),
                 sweepText is null ? null : Sweep(sweepText),
                 targetText is null ? null : Target(targetText));
-            var phases = phasesPath is null ? null : PhaseFile.Parse(InputText.ReadAll(phasesPath), phasesPath, flow.Graph);
+            var phases = phasesPath is null ? null : PhaseFile.Read(phasesPath, flow.Graph);
             var report = NoiseAnalysis.Analyze(flow, phases);
             stdout.Write(json ? NoiseJson.Write(report, request) : NoiseText.Write(report, request, certPath));
             return report.Valid ? ExitCode.Flow : ExitCode.NoFlow;

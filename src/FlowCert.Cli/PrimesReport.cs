@@ -18,7 +18,10 @@ public static class PrimesReport
 
     /// <summary>Verdict and depth in words: "flow, depth 3" or "no flow (blocked 4 nodes)".</summary>
     public static string Verdict(FlowResult r)
-        => r.HasFlow ? $"flow, depth {r.Depth}" : $"no flow (blocked {Counted.Of(r.Obstruction!.Nodes.Count, "node")})";
+        => FlowOrNot(r.HasFlow, r.Depth) + (r.HasFlow ? "" : $" (blocked {Counted.Of(r.Obstruction!.Nodes.Count, "node")})");
+
+    // The one wording of a verdict and its depth: "flow, depth 3" or "no flow".
+    private static string FlowOrNot(bool hasFlow, int depth) => hasFlow ? $"flow, depth {depth}" : "no flow";
 
     /// <summary>The short human table.</summary>
     public static void WriteTable(TextWriter o, string source, PrimeSurvey s, AuditResult? audit, IReadOnlyList<string> written)
@@ -65,7 +68,7 @@ public static class PrimesReport
                 ? $"audit     every prime up to {audit.UpTo} solved directly ({Counted.Of(audit.PrimesSolved, "prime")}{(audit.PrimesUnclassified > 0 ? $", {audit.PrimesUnclassified} without a claim" : "")}): all agree with the claim"
                 : $"audit     {Counted.Of(audit.Disagreements.Count, "DISAGREEMENT")} up to {audit.UpTo}: a bug in flowcert, please report it with the graph");
             foreach (var d in audit.Disagreements)
-                o.WriteLine($"          p = {d.Claim.Prime}: claimed {ClaimText(d.Claim)}, solved {(d.Direct.Result is { } r ? Verdict(r) : "undefined")}");
+                o.WriteLine($"          p = {d.Claim.Prime}: claimed {ClaimText(d.Claim)}, solved {DirectText(d.Direct)}");
         }
         if (written.Count > 0) o.WriteLine($"certificates {written.Count} written: {string.Join(" ", written.Select(f => Escaped.Of(Path.GetFileName(f))))} in {Escaped.Of(Path.GetDirectoryName(written[0]) ?? "")}");
     }
@@ -75,12 +78,14 @@ public static class PrimesReport
         => edges.Count <= MaxEdgesShown ? VanishingEdges.Describe(g, edges)
             : $"{VanishingEdges.Describe(g, edges.Take(MaxEdgesShown).ToList())}, ... ({edges.Count} in all)";
 
-    private static string Short(FlowResult r) => r.HasFlow ? $"flow, depth {r.Depth}" : "no flow";
+    private static string Short(FlowResult r) => FlowOrNot(r.HasFlow, r.Depth);
 
     private static bool SameAsQ(FlowResult r, FlowResult q) => r.HasFlow == q.HasFlow && (!r.HasFlow || r.Depth == q.Depth);
 
+    private static string DirectText(PrimeAnswer a) => a.Result is { } r ? Verdict(r) : "undefined";
+
     private static string ClaimText(PrimeClaim c)
-        => !c.Defined ? "undefined" : c.HasFlow ? $"flow, depth {c.Depth}" : "no flow";
+        => !c.Defined ? "undefined" : FlowOrNot(c.HasFlow, c.Depth);
 
     /// <summary>One JSON object: the Q answer, the exceptional primes with their answers, the integers, the unclassified part.</summary>
     public static void WriteJson(TextWriter stdout, string source, PrimeSurvey s, AuditResult? audit, IReadOnlyList<string> written)
@@ -109,8 +114,7 @@ public static class PrimesReport
         w.WritePropertyName("otherPrimes");
         w.WriteStartObject();
         w.WritePropertyName("sameAsRational"); w.WriteValue(true);
-        w.WritePropertyName("verdict"); w.WriteValue(s.Rational.HasFlow ? "flow" : "noflow");
-        w.WritePropertyName("depth"); if (s.Rational.HasFlow) w.WriteValue(s.Rational.Depth); else w.WriteNull();
+        Summary.WriteVerdictJson(w, s.Rational);
         w.WriteEndObject();
         w.WritePropertyName("complete"); w.WriteValue(s.IsComplete);
         w.WritePropertyName("integers");
@@ -153,7 +157,7 @@ public static class PrimesReport
                 w.WriteStartObject();
                 w.WritePropertyName("prime"); w.WriteValue(d.Claim.Prime);
                 w.WritePropertyName("claim"); w.WriteValue(ClaimText(d.Claim));
-                w.WritePropertyName("direct"); w.WriteValue(d.Direct.Result is { } r ? Verdict(r) : "undefined");
+                w.WritePropertyName("direct"); w.WriteValue(DirectText(d.Direct));
                 w.WriteEndObject();
             }
             w.WriteEndArray();
@@ -181,8 +185,7 @@ public static class PrimesReport
     {
         w.WriteStartObject();
         w.WritePropertyName("field"); w.WriteValue(r.Field.Name);
-        w.WritePropertyName("verdict"); w.WriteValue(r.HasFlow ? "flow" : "noflow");
-        w.WritePropertyName("depth"); if (r.HasFlow) w.WriteValue(r.Depth); else w.WriteNull();
+        Summary.WriteVerdictJson(w, r);
         w.WritePropertyName("blocked"); if (r.Obstruction is { } b) { w.WriteStartArray(); foreach (var v in b.Nodes) w.WriteValue(g.Names[v]); w.WriteEndArray(); } else w.WriteNull();
         w.WritePropertyName("vanishedEdges"); Edges(w, g, r.VanishedEdges);
         w.WriteEndObject();

@@ -76,7 +76,7 @@ public static class SimulateCommand
             {
                 int p = (int)result.Field.Prime;
                 given = request.Angles is null ? new MeasurementAngles(p, new Dictionary<int, double[]>())
-                    : MeasurementAngles.Parse(InputText.ReadAll(request.Angles), request.Angles, result.Graph, p);
+                    : MeasurementAngles.Read(request.Angles, result.Graph, p);
                 double rows = Math.Pow(p, result.Graph.Outputs.Count), columns = Math.Pow(p, result.Graph.Inputs.Count);
                 if (request.Map && request.Out is null && rows * columns > MaxPrintedEntries)
                     throw new UserInputException($"the map has {rows:0} x {columns:0} entries, too many to print: write it as JSON with --out FILE");
@@ -111,9 +111,11 @@ public static class SimulateCommand
         }
     }
 
+    // A floating-point figure of the report (deviations, probabilities, tolerances): scientific, at most 4 significant digits.
+    private static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
+
     private static void WriteComparison(TextWriter o, string claimPath, QuditPattern pattern, MapComparison c)
     {
-        static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;
         int p = pattern.Dimension;
         var entry = $"entry (out {ImplementedMap.BasisLabel(p, g.Outputs.Count, c.Row)}, in {ImplementedMap.BasisLabel(p, g.Inputs.Count, c.Column)})";
@@ -151,7 +153,6 @@ public static class SimulateCommand
     private static void Write(TextWriter o, string graphPath, string certPath, string field, QuditPattern pattern, DeterminismReport r, OutcomeBranches selection, ulong seed,
         MapRequest request, MeasurementAngles? given)
     {
-        static string G(double x) => x.ToString("0.###e+0", CultureInfo.InvariantCulture);
         var g = pattern.Graph;
         o.WriteLine($"pattern      {Escaped.Of(graphPath)} with {Escaped.Of(certPath)}: {field}, {Counted.Of(r.MeasuredNodes, "measured node")}, {Counted.Of(g.Outputs.Count, "output")}");
         o.WriteLine($"state        dimension {r.Dimension}: {r.Qudits} qudits, at most {r.PeakLive} live at once + {r.ReferenceQudits} reference = {r.Amplitudes} amplitudes at the peak");

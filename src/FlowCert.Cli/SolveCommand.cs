@@ -94,8 +94,7 @@ public static class SolveCommand
     {
         using var w = new JsonTextWriter(stdout) { Formatting = Formatting.None, CloseOutput = false };
         w.WriteStartObject();
-        w.WritePropertyName("verdict"); w.WriteValue(r.HasFlow ? "flow" : "noflow");
-        w.WritePropertyName("depth"); if (r.HasFlow) w.WriteValue(r.Depth); else w.WriteNull();
+        Summary.WriteVerdictJson(w, r);
         w.WritePropertyName("flow"); w.WriteValue(FlowKinds.Name(r.Kind));
         w.WritePropertyName("field"); w.WriteValue(r.Field.Name);
         w.WritePropertyName("nodes"); w.WriteValue(r.Graph.NodeCount);

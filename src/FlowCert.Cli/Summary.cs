@@ -10,6 +10,13 @@ public static class Summary
 {
     private const int MaxRoundsShown = 12, MaxNodesShown = 10;
 
+    /// <summary>The "verdict" ("flow" or "noflow") and "depth" (null without a flow) members of the JSON that solve and primes print.</summary>
+    public static void WriteVerdictJson(Newtonsoft.Json.JsonWriter w, FlowResult r)
+    {
+        w.WritePropertyName("verdict"); w.WriteValue(r.HasFlow ? "flow" : "noflow");
+        w.WritePropertyName("depth"); if (r.HasFlow) w.WriteValue(r.Depth); else w.WriteNull();
+    }
+
     public static void Write(TextWriter o, string source, FlowResult r, string? certificatePath)
     {
         var g = r.Graph;

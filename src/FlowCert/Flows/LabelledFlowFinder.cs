@@ -33,18 +33,20 @@ internal static class LabelledFlowFinder
             var unprocessed = Enumerable.Range(0, n).Where(v => inU[v]).ToArray();
             if (unprocessed.Length == 0) break;
             var layer = new List<int>();
+            var unsolvable = new List<LabelledSystem>();
             foreach (var v in unprocessed)
             {
-                var p = new LabelledSystem(adjacency, graph, inU, unprocessed, v).Solve();
-                if (p is null) continue;
+                var system = new LabelledSystem(adjacency, graph, inU, unprocessed, v);
+                var p = system.Solve();
+                if (p is null) { unsolvable.Add(system); continue; }
                 layer.Add(v);
                 corrections[v] = LayeredSearch.ToNodeVector(g, p, p.Select(_ => g.Field.One).ToArray());
             }
             if (layer.Count == 0)
             {
-                var witnesses = unprocessed
-                    .Select(v => new LabelledSystem(adjacency, graph, inU, unprocessed, v).Witness(v)
-                        ?? throw new InvalidOperationException($"node {graph.Names[v]} is unsolvable but has no witness"))
+                // Every node's system is unsolvable: each gives its witness from its one elimination.
+                var witnesses = unsolvable
+                    .Select(s => s.Witness() ?? throw new InvalidOperationException($"node {graph.Names[s.Node]} is unsolvable but has no witness"))
                     .ToList();
                 blocked = new BlockedSet(unprocessed, []) { NodeWitnesses = witnesses };
                 break;

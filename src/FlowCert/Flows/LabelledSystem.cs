@@ -13,20 +13,26 @@ namespace FlowCert.Flows;
 /// <item>v's self row when v is labelled XZ, YZ or Z: x_v = 1 (an all-zero row when v is an input).</item>
 /// </list>
 /// Its solutions are exactly the correction sets p(v) allowed when every node outside U is later than v
-/// and no node of U is.
+/// and no node of U is. The system is eliminated once, by the shared F_2 kernel (<see cref="BitElimination"/>),
+/// as the block [[M, b], [0, 1]]: its rows in reverse order after a first row t = (0 ... 0 1), so that
+/// the canonical solution of B c = e_t is (x, 1) with x the solution of M x = b whose free unknowns are
+/// zero, and the left-kernel vectors with y_t = 1 are the witnesses y^T M = 0, y^T b = 1.
 /// </summary>
 internal sealed class LabelledSystem
 {
+    private readonly IEliminationResult<ulong> elimination;
+
+    /// <summary>The node v whose corrections the system describes.</summary>
+    public int Node { get; }
+
     /// <summary>The node of each row, and whether it is v's self row; rows in node order, the self row last.</summary>
     public (int Node, bool Self)[] Rows { get; }
     /// <summary>The unknowns, by node, sorted.</summary>
     public int[] Columns { get; }
-    /// <summary>The matrix M, row by row (true is 1).</summary>
-    public bool[][] Matrix { get; }
-    public bool[] RightHandSide { get; }
 
     public LabelledSystem(bool[][] adjacency, OpenGraph graph, bool[] inU, int[] unprocessed, int v)
     {
+        Node = v;
         int n = graph.NodeCount;
         var columns = new List<int>();
         for (int c = 0; c < n; c++)
@@ -43,99 +49,48 @@ internal sealed class LabelledSystem
         var lv = graph.Label(v);
         if (lv is MeasurementLabel.XZ or MeasurementLabel.YZ or MeasurementLabel.Z) rows.Add((v, true));
         Rows = rows.ToArray();
-        Matrix = new bool[Rows.Length][];
-        RightHandSide = new bool[Rows.Length];
-        for (int r = 0; r < Rows.Length; r++)
+        // Row r of M (with b in column z = Columns.Length) is row m - r of the block; row 0 is t.
+        int m = Rows.Length, z = Columns.Length;
+        var block = new SparseVector<ulong>[m + 1];
+        block[0] = SparseVector<ulong>.Unit(z, 1);
+        var entries = new List<int>();
+        for (int r = 0; r < m; r++)
         {
             var (u, self) = Rows[r];
-            Matrix[r] = new bool[Columns.Length];
+            entries.Clear();
             for (int k = 0; k < Columns.Length; k++)
             {
                 int c = Columns[k];
-                Matrix[r][k] = self
-                    ? c == u
-                    : adjacency[u][c] ^ (c == u && graph.Label(u) == MeasurementLabel.Y);
+                if (self ? c == u : adjacency[u][c] ^ (c == u && graph.Label(u) == MeasurementLabel.Y)) entries.Add(k);
             }
-            RightHandSide[r] = self || (u == v && lv != MeasurementLabel.YZ);
+            if (self || (u == v && lv != MeasurementLabel.YZ)) entries.Add(z);
+            block[m - r] = new SparseVector<ulong>(entries.ToArray(), entries.Select(_ => 1UL).ToArray());
         }
+        // The packed kernel itself rather than the field's choice: its left kernel is in reduced echelon
+        // form (BitElimination.Run), which Witness reads the published witness from.
+        elimination = BitElimination.Run(block);
     }
 
-    /// <summary>The correction set p(v) (sorted nodes), or null when the system has no solution.</summary>
+    /// <summary>The correction set p(v) (sorted nodes): the solution whose free unknowns are zero; null when there is none.</summary>
     public int[]? Solve()
-    {
-        var reduced = new GaussJordan2(Matrix, RightHandSide);
-        if (reduced.Inconsistent() is not null) return null;
-        return reduced.Solution().Select(k => Columns[k]).ToArray();
-    }
+        => elimination.SolveUnitVectors().TryGetValue(0, out var c)
+            ? c.Indices.Where(k => k < Columns.Length).Select(k => Columns[k]).ToArray()
+            : null;
 
     /// <summary>
-    /// A witness y with y^T M = 0 and y^T b = 1 (flows.md 9.5): the row combination that reduces to 0 = 1
-    /// first (in row order after Gauss-Jordan elimination); null when the system is solvable.
+    /// A witness y with y^T M = 0 and y^T b = 1 (flows.md 9.5); null when the system is solvable. It is the
+    /// vector of the reduced echelon basis of the block's left kernel with y_t = 1 (the only one with an
+    /// entry at t, its first column): the row combination that Gauss-Jordan elimination of [M | b], pivots
+    /// taken column by column and the first free row with a one as pivot, reduces to 0 = 1 first.
     /// </summary>
-    public RowWitness? Witness(int v)
+    public RowWitness? Witness()
     {
-        if (new GaussJordan2(Matrix, RightHandSide).Inconsistent() is not { } y) return null;
+        if (elimination.LeftKernel().FirstOrDefault(y => y.Indices[0] == 0) is not { Indices: not null } witness) return null;
+        int m = Rows.Length;
         var rows = new List<int>();
         bool self = false;
-        for (int r = 0; r < y.Length; r++)
-        {
-            if (!y[r]) continue;
+        foreach (var r in witness.Indices.Skip(1).Select(id => m - id).Order())
             if (Rows[r].Self) self = true; else rows.Add(Rows[r].Node);
-        }
-        return new RowWitness(v, rows, self);
+        return new RowWitness(Node, rows, self);
     }
-}
-
-/// <summary>
-/// Gauss-Jordan elimination over F_2 of [M | b | I], rows packed 64 entries to a word; pivots are taken
-/// column by column, lowest column first, so the solution with free unknowns zero is unique.
-/// </summary>
-internal sealed class GaussJordan2
-{
-    private readonly ulong[][] rows;
-    private readonly int columns, m;
-    private readonly List<(int Column, int Row)> pivots = [];
-    private readonly bool[] isPivotRow;
-
-    public GaussJordan2(bool[][] matrix, bool[] rhs)
-    {
-        m = matrix.Length;
-        columns = m == 0 ? 0 : matrix[0].Length;
-        int width = columns + 1 + m, words = (width + 63) / 64;
-        rows = new ulong[m][];
-        isPivotRow = new bool[m];
-        for (int r = 0; r < m; r++)
-        {
-            rows[r] = new ulong[words];
-            for (int k = 0; k < columns; k++) if (matrix[r][k]) Set(rows[r], k);
-            if (rhs[r]) Set(rows[r], columns);
-            Set(rows[r], columns + 1 + r);
-        }
-        for (int k = 0; k < columns; k++)
-        {
-            int pivot = -1;
-            for (int r = 0; r < m && pivot < 0; r++) if (!isPivotRow[r] && Get(rows[r], k)) pivot = r;
-            if (pivot < 0) continue;
-            for (int r = 0; r < m; r++)
-                if (r != pivot && Get(rows[r], k))
-                    for (int w = 0; w < words; w++) rows[r][w] ^= rows[pivot][w];
-            isPivotRow[pivot] = true;
-            pivots.Add((k, pivot));
-        }
-    }
-
-    private static bool Get(ulong[] row, int k) => (row[k >> 6] >> (k & 63) & 1) != 0;
-    private static void Set(ulong[] row, int k) => row[k >> 6] |= 1UL << (k & 63);
-
-    /// <summary>The row combination y (over the original rows) of the first row that reads 0 = 1, or null.</summary>
-    public bool[]? Inconsistent()
-    {
-        for (int r = 0; r < m; r++)
-            if (!isPivotRow[r] && Get(rows[r], columns))
-                return Enumerable.Range(0, m).Select(j => Get(rows[r], columns + 1 + j)).ToArray();
-        return null;
-    }
-
-    /// <summary>The unknowns equal to 1 in the solution whose free unknowns are 0, sorted.</summary>
-    public IEnumerable<int> Solution() => pivots.Where(p => Get(rows[p.Row], columns)).Select(p => p.Column).Order();
 }

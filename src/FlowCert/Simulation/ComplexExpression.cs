@@ -21,10 +21,14 @@ public sealed class ExpressionException(int offset, string problem) : Exception(
 /// factor  = number | "i" | "pi" | "w" | ("sqrt" | "exp" | "cos" | "sin") "(" expr ")" | "(" expr ")"
 /// number  = digits [ "." digits ] [ ("e" | "E") [ "+" | "-" ] digits ]
 /// </code>
-/// "w" is exp(2 pi i / p) for the dimension p given; spaces are ignored.
+/// "w" is exp(2 pi i / p) for the dimension p given; spaces are ignored. Nesting (brackets, signs and
+/// powers) deeper than <see cref="MaxDepth"/> is refused, so a hostile file cannot overflow the stack.
 /// </summary>
 public static class ComplexExpression
 {
+    /// <summary>The deepest nesting of brackets, signs and powers read (common practice for recursive-descent readers of untrusted input).</summary>
+    public const int MaxDepth = 200;
+
     /// <summary>Evaluates the text; throws <see cref="ExpressionException"/> with the offset of the first problem.</summary>
     public static Complex Parse(string text, int dimension)
     {
@@ -95,11 +99,20 @@ public static class ComplexExpression
             return !AtEnd && (char.IsAsciiLetter(text[Position]) || text[Position] == '(');
         }
 
+        private int depth;
+
+        // Every recursion of the grammar passes through here, so this bounds the stack.
         private Complex Unary()
         {
-            if (Accept('-')) return -Unary();
-            if (Accept('+')) return Unary();
-            return Power();
+            SkipSpace();
+            if (++depth > MaxDepth) throw new ExpressionException(Position, $"nested deeper than {MaxDepth} levels");
+            try
+            {
+                if (Accept('-')) return -Unary();
+                if (Accept('+')) return Unary();
+                return Power();
+            }
+            finally { depth--; }
         }
 
         private Complex Power()

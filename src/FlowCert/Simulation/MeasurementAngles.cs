@@ -1,5 +1,6 @@
 using System.Numerics;
 using FlowCert.Graphs;
+using FlowCert.Graphs.Formats;
 
 namespace FlowCert.Simulation;
 
@@ -34,6 +35,9 @@ public sealed class MeasurementAngles
     public IReadOnlyDictionary<int, Complex[]> Diagonals()
         => Phases.ToDictionary(kv => kv.Key, kv => kv.Value.Select(t => Complex.FromPolarCoordinates(1, t)).ToArray());
 
+    /// <summary>Reads the angles file at <paramref name="path"/> as <see cref="Parse"/> does.</summary>
+    public static MeasurementAngles Read(string path, OpenGraph g, int p) => FromLines(Syntax(p).Read(path, g), p);
+
     /// <summary>
     /// Reads <c>NODE VALUE</c> lines (docs/circuits.md, "Angles"): for qubits VALUE is the angle a; for
     /// p &gt;= 3 it is theta_0,...,theta_(p-1) separated by commas. Each number follows the grammar of
@@ -41,49 +45,32 @@ public sealed class MeasurementAngles
     /// '#' on are ignored. Throws <see cref="GraphFormatException"/> (file, line, column) for a node not in
     /// the graph, an output, a node given twice, a wrong count of values or a malformed number.
     /// </summary>
-    public static MeasurementAngles Parse(string text, string fileName, OpenGraph g, int p)
+    public static MeasurementAngles Parse(string text, string fileName, OpenGraph g, int p) => FromLines(Syntax(p).Lines(text, fileName, g), p);
+
+    private static NodeValueFile Syntax(int p) => new("an angles file",
+        p == 2 ? "NODE VALUE, VALUE its angle such as pi/4" : $"NODE VALUE, VALUE {p} phases separated by commas", "angle", ValueIsRestOfLine: true);
+
+    private static MeasurementAngles FromLines(IEnumerable<NodeValueLine> lines, int p)
     {
         var phases = new Dictionary<int, double[]>();
-        var lines = text.Split('\n');
-        for (int k = 0; k < lines.Length; k++)
+        foreach (var line in lines)
         {
-            var line = lines[k].TrimEnd('\r');
-            int hash = line.IndexOf('#');
-            if (hash >= 0) line = line[..hash];
-            int line1 = k + 1;
-            int nameStart = 0;
-            while (nameStart < line.Length && char.IsWhiteSpace(line[nameStart])) nameStart++;
-            if (nameStart == line.Length) continue;
-            int nameEnd = nameStart;
-            while (nameEnd < line.Length && !char.IsWhiteSpace(line[nameEnd])) nameEnd++;
-            var name = line[nameStart..nameEnd];
-            if (!g.Contains(name)) throw new GraphFormatException(fileName, line1, nameStart + 1, $"'{name}' is not a node of the graph");
-            int v = g.IndexOf(name);
-            if (g.Outputs.Contains(v)) throw new GraphFormatException(fileName, line1, nameStart + 1, $"'{name}' is an output: it is not measured and takes no angle");
-            if (phases.ContainsKey(v)) throw new GraphFormatException(fileName, line1, nameStart + 1, $"'{name}' is given a second time");
-            int valueStart = nameEnd;
-            while (valueStart < line.Length && char.IsWhiteSpace(line[valueStart])) valueStart++;
-            if (valueStart == line.Length)
-                throw new GraphFormatException(fileName, line1, valueStart + 1, $"'{name}' has no value: write {(p == 2 ? "its angle, such as pi/4" : $"{p} phases separated by commas")}");
             var parts = new List<(int Start, string Text)>();
-            int start = valueStart;
-            for (int i = valueStart; i <= line.Length; i++)
-                if (i == line.Length || line[i] == ',') { parts.Add((start, line[start..i])); start = i + 1; }
+            int start = 0;
+            for (int i = 0; i <= line.Value.Length; i++)
+                if (i == line.Value.Length || line.Value[i] == ',') { parts.Add((start, line.Value[start..i])); start = i + 1; }
             int expected = p == 2 ? 1 : p;
             if (parts.Count != expected)
-                throw new GraphFormatException(fileName, line1, valueStart + 1, p == 2
+                throw line.Error(0, p == 2
                     ? $"a qubit takes one angle in its plane, not {parts.Count} values"
                     : $"a qudit of dimension {p} takes {p} diagonal phases theta_0,...,theta_{p - 1} separated by commas, not {parts.Count}");
             var values = new double[parts.Count];
             for (int i = 0; i < parts.Count; i++)
             {
                 try { values[i] = ComplexExpression.ParseReal(parts[i].Text, p); }
-                catch (ExpressionException e)
-                {
-                    throw new GraphFormatException(fileName, line1, parts[i].Start + e.Offset + 1, $"value of '{name}': {e.Message}");
-                }
+                catch (ExpressionException e) { throw line.Error(parts[i].Start + e.Offset, $"value of '{line.Name}': {e.Message}"); }
             }
-            phases[v] = p == 2 ? QubitAngle(values[0]) : values;
+            phases[line.Node] = p == 2 ? QubitAngle(values[0]) : values;
         }
         return new MeasurementAngles(p, phases);
     }

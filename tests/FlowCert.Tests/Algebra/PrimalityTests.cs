@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Numerics;
 using FlowCert.Algebra;
 
@@ -25,28 +24,6 @@ public class PrimalityTests
             Assert.True(!composite[n] == Primality.IsPrime((ulong)n), $"IsPrime({n}) should be {!composite[n]}");
     }
 
-    /// <summary>Prime factors as printed by coreutils factor ("n: p q r").</summary>
-    private static Dictionary<BigInteger, BigInteger[]> Factor(IEnumerable<BigInteger> numbers)
-    {
-        var list = numbers.Distinct().ToList();
-        var run = ExternalProgram.Run("factor", "coreutils", list.Select(n => n.ToString(CultureInfo.InvariantCulture)));
-        Assert.True(run.ExitCode == 0, $"factor failed: {run.Stderr}");
-        var result = new Dictionary<BigInteger, BigInteger[]>();
-        foreach (var line in run.Stdout.Split('\n', StringSplitOptions.RemoveEmptyEntries))
-        {
-            var parts = line.Split(':');
-            result[BigInteger.Parse(parts[0], CultureInfo.InvariantCulture)] = parts[1]
-                .Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(s => BigInteger.Parse(s, CultureInfo.InvariantCulture)).ToArray();
-        }
-        Assert.Equal(list.Count, result.Count);
-        foreach (var n in list)
-        {
-            var product = result[n].Aggregate(BigInteger.One, (a, b) => a * b);
-            Assert.Equal(n, product); // factor's answer is at least a factorisation of n
-        }
-        return result;
-    }
-
     private static bool PrimeByFactor(Dictionary<BigInteger, BigInteger[]> f, BigInteger n) => f[n].Length == 1;
 
     /// <summary>Strong probable prime to base a (the Miller-Rabin round), written independently over BigInteger.</summary>
@@ -64,26 +41,34 @@ public class PrimalityTests
         return false;
     }
 
-    public static TheoryData<ulong, bool> NamedNumbers => new()
+    /// <summary>Named numbers and whether they are prime, each with its source; BigPrimality's tests below 2^64 use them too.</summary>
+    internal static readonly (ulong N, bool Prime)[] Named =
+    [
+        ((1UL << 31) - 1, true),            // Mersenne prime M31 (OEIS A000043, from memory)
+        ((1UL << 61) - 1, true),            // Mersenne prime M61 (OEIS A000043, from memory)
+        ((1UL << 62) - 57, true),           // largest prime below 2^62 (from memory)
+        (ulong.MaxValue - 58, true),        // 2^64 - 59, the largest prime below 2^64 (from memory)
+        (1_000_000_007, true),              // common practice
+        (998_244_353, true),                // 119 * 2^23 + 1 (common practice)
+        ((1UL << 62) - 1, false),           // 3 divides 2^(2k) - 1
+        (ulong.MaxValue, false),            // 2^64 - 1 = 3 * 5 * 17 * 257 * 641 * 65537 * 6700417
+        ((1UL << 59) - 1, false),           // 2^59 - 1 is not a Mersenne prime (179951 divides it; from memory)
+        (4_294_967_297, false),             // F5 = 641 * 6700417 (common practice)
+        (4_294_967_291UL * 4_294_967_279UL, false), // product of the two largest primes below 2^32 (from memory)
+    ];
+
+    public static TheoryData<ulong, bool> NamedNumbers()
     {
-        { (1UL << 31) - 1, true },            // Mersenne prime M31 (OEIS A000043, from memory)
-        { (1UL << 61) - 1, true },            // Mersenne prime M61 (OEIS A000043, from memory)
-        { (1UL << 62) - 57, true },           // largest prime below 2^62 (from memory)
-        { ulong.MaxValue - 58, true },        // 2^64 - 59, the largest prime below 2^64 (from memory)
-        { 1_000_000_007, true },              // common practice
-        { 998_244_353, true },                // 119 * 2^23 + 1 (common practice)
-        { (1UL << 62) - 1, false },           // 3 divides 2^(2k) - 1
-        { ulong.MaxValue, false },            // 2^64 - 1 = 3 * 5 * 17 * 257 * 641 * 65537 * 6700417
-        { (1UL << 59) - 1, false },           // 2^59 - 1 is not a Mersenne prime (179951 divides it; from memory)
-        { 4_294_967_297, false },             // F5 = 641 * 6700417 (common practice)
-        { 4_294_967_291UL * 4_294_967_279UL, false }, // product of the two largest primes below 2^32 (from memory)
-    };
+        var data = new TheoryData<ulong, bool>();
+        foreach (var (n, prime) in Named) data.Add(n, prime);
+        return data;
+    }
 
     [Theory]
     [MemberData(nameof(NamedNumbers))]
     public void NamedPrimesAndCompositesAreClassifiedAsCoreutilsFactorSays(ulong n, bool prime)
     {
-        var f = Factor([n]);
+        var f = CoreutilsFactor.Of([n]);
         Assert.Equal(prime, PrimeByFactor(f, n)); // the value remembered above is right
         // Do not take factor's word for primality: a composite is proved by its factors (their product is
         // checked in Factor), a prime by a Pratt certificate checked here with BigInteger.
@@ -115,7 +100,7 @@ public class PrimalityTests
     private static bool ProvePrime(BigInteger n)
     {
         if (n < (BigInteger.One << 32)) return TrialDivisionPrime(n);
-        var qs = Factor([n - 1])[n - 1].Distinct().ToArray();
+        var qs = CoreutilsFactor.Of([n - 1])[n - 1].Distinct().ToArray();
         if (!qs.All(ProvePrime)) return false;
         for (BigInteger a = 2; a < 1000; a++)
             if (BigInteger.ModPow(a, n - 1, n).IsOne && qs.All(q => !BigInteger.ModPow(a, (n - 1) / q, n).IsOne))
@@ -147,7 +132,7 @@ public class PrimalityTests
         // so a Fermat test alone calls them prime. Korselt's criterion is re-checked here: n squarefree,
         // and p - 1 divides n - 1 for every prime p dividing n.
         BigInteger[] carmichael = [561, 1105, 1729, 2465, 2821, 6601, 8911, 10585, 15841, 29341, 41041, 62745, 63973, 75361, 101101, 126217, 172081, 188461, 252601, 278545, 294409, 314821, 334153, 340561, 399001, 410041, 449065, 488881, 512461];
-        var f = Factor(carmichael);
+        var f = CoreutilsFactor.Of(carmichael);
         foreach (var n in carmichael)
         {
             var primes = f[n];
@@ -176,7 +161,7 @@ public class PrimalityTests
             (341550071728321, [2, 3, 5, 7, 11, 13, 17]),
             (3825123056546413051, [2, 3, 5, 7, 11, 13, 17, 19, 23]),
         ];
-        var f = Factor(cases.Select(c => c.N));
+        var f = CoreutilsFactor.Of(cases.Select(c => c.N));
         foreach (var (n, bases) in cases)
         {
             Assert.True(f[n].Length > 1, $"{n} is prime according to factor");
@@ -209,7 +194,7 @@ public class PrimalityTests
         }
         // Primes just below 2^64, found by walking down with factor as the judge.
         for (ulong n = ulong.MaxValue - 400; n < ulong.MaxValue; n += 2) numbers.Add(n);
-        var f = Factor(numbers);
+        var f = CoreutilsFactor.Of(numbers);
         int primes = 0;
         foreach (var n in numbers.Distinct())
         {

@@ -87,12 +87,12 @@ public sealed class MapCommandTests : IDisposable
     }
 
     [Theory]
-    [InlineData("r9c9 1,2,3,4,5\n", ":1:1: 'r9c9' is not a node of the graph")]
-    [InlineData("r0c2 1,2,3,4,5\n", ":1:1: 'r0c2' is an output")]
+    [InlineData("r9c9 1,2,3,4,5\n", ":1:1: unknown node 'r9c9'")]
+    [InlineData("r0c2 1,2,3,4,5\n", ":1:1: node r0c2 is an output")]
     [InlineData("\nr0c0 1,2\n", ":2:6: a qudit of dimension 5 takes 5 diagonal phases")]
     [InlineData("r0c0 1,2,3,4,5x\n", ":1:15: value of 'r0c0': unknown name 'x'")]
     [InlineData("r0c0 1,2,3,4,i\n", ":1:14: value of 'r0c0': 'i' is not a real number")]
-    [InlineData("r0c0 0,0,0,0,0\n  r0c0 0,0,0,0,0\n", ":2:3: 'r0c0' is given a second time")]
+    [InlineData("r0c0 0,0,0,0,0\n  r0c0 0,0,0,0,0\n", ":2:3: node r0c0 has two angles (lines 1 and 2)")]
     public void ABadAnglesFileIsRefusedWithItsPlace(string text, string expected)
     {
         var (graph, cert) = Solve("patch", Patch);

@@ -66,8 +66,8 @@ public class NoiseCommandTests
     [InlineData("t1 1/2\nt4 3\n", ":2:1:", "t4 is an output")]
     [InlineData("t1 1/2\n  zz 3\n", ":2:3:", "unknown node 'zz'")]
     [InlineData("t1 x\n", ":1:4:", "'x' is not an exact rational")]
-    [InlineData("t1 1 2\n", ":1:6:", "a phase line is NODE t")]
-    [InlineData("t1 1\n# again\nt1 2\n", ":3:1:", "t1 has a phase already (line 1)")]
+    [InlineData("t1 1 2\n", ":1:6:", "a line of a phases file is NODE t")]
+    [InlineData("t1 1\n# again\nt1 2\n", ":3:1:", "node t1 has two phases (lines 1 and 3)")]
     public void APhasesFileErrorNamesFileLineAndColumn(string phases, string where, string problem)
     {
         using var w = new Workspace();

@@ -54,6 +54,26 @@ public class ComplexExpressionTests
     }
 
     [Fact]
+    public void DeepNestingIsRefusedRatherThanOverflowingTheStack()
+    {
+        // A thread stack of 1 MiB (as .NET gives secondary threads), so that unbounded recursion would crash the test host here.
+        string[] texts = [new string('(', 100_000) + "1", new string('-', 100_000) + "1",
+                          string.Concat(Enumerable.Repeat("2^", 100_000)) + "1", string.Concat(Enumerable.Repeat("sqrt(", 100_000)) + "1"];
+        var caught = new Exception?[texts.Length];
+        var thread = new Thread(() =>
+        {
+            for (int k = 0; k < texts.Length; k++)
+                try { ComplexExpression.Parse(texts[k], 3); }
+                catch (Exception e) { caught[k] = e; }
+        }, 1024 * 1024);
+        thread.Start();
+        thread.Join();
+        Assert.All(caught, e => Assert.Contains($"nested deeper than {ComplexExpression.MaxDepth} levels", Assert.IsType<ExpressionException>(e).Message));
+        // The limit itself is reachable: MaxDepth - 1 brackets around a number are read.
+        Assert.Equal(1, ComplexExpression.Parse(new string('(', ComplexExpression.MaxDepth - 1) + "1" + new string(')', ComplexExpression.MaxDepth - 1), 3).Real);
+    }
+
+    [Fact]
     public void AWrittenMapReadsBackAsAClaim()
     {
         var m = Matrix<Complex>.Build.DenseOfArray(new[,] { { new Complex(0.5, -0.25), new Complex(0, 1) }, { new Complex(-1e-14, 0), new Complex(-0.75, 0) } });

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Numerics;
 using FlowCert.Algebra.Factoring;
+using FlowCert.Tests.Algebra;
 
 namespace FlowCert.Tests.Algebra.Factoring;
 
@@ -23,25 +24,9 @@ public class IntegerFactoringTests
     private static BigInteger Big(string s) => BigInteger.Parse(s, CultureInfo.InvariantCulture);
     private static FactoringBudget Plenty => new(TimeSpan.FromSeconds(60));
 
-    /// <summary>coreutils factor's prime factors (with multiplicity) of each number.</summary>
-    private static Dictionary<BigInteger, BigInteger[]> CoreutilsFactor(IEnumerable<BigInteger> numbers)
-    {
-        var list = numbers.Distinct().ToList();
-        var run = ExternalProgram.Run("factor", "coreutils", list.Select(n => n.ToString(CultureInfo.InvariantCulture)));
-        Assert.True(run.ExitCode == 0, $"factor failed: {run.Stderr}");
-        var result = new Dictionary<BigInteger, BigInteger[]>();
-        foreach (var line in run.Stdout.Split('\n', StringSplitOptions.RemoveEmptyEntries))
-        {
-            var parts = line.Split(':');
-            result[Big(parts[0])] = parts[1].Split(' ', StringSplitOptions.RemoveEmptyEntries).Select(Big).ToArray();
-        }
-        Assert.Equal(list.Count, result.Count);
-        return result;
-    }
-
     private static void AssertPrimeByCoreutils(params BigInteger[] numbers)
     {
-        foreach (var (n, f) in CoreutilsFactor(numbers))
+        foreach (var (n, f) in CoreutilsFactor.Of(numbers))
             Assert.True(f.Length == 1 && f[0] == n, $"coreutils factor says {n} is not prime: {string.Join(" ", f)}");
     }
 
@@ -132,7 +117,7 @@ public class IntegerFactoringTests
             var n = new BigInteger(bytes, isUnsigned: true);
             if (n > 1) numbers.Add(n);
         }
-        var reference = CoreutilsFactor(numbers);
+        var reference = CoreutilsFactor.Of(numbers);
         foreach (var n in numbers.Distinct())
         {
             var f = IntegerFactoring.Factor(n, Plenty);
@@ -152,9 +137,9 @@ public class IntegerFactoringTests
         // Composites above 2^64 with no small factor, including a square (the Lucas part refuses squares).
         foreach (var c in new[] { P20 * P21, P20 * P20, Q10a * Q10b * Q11, P25 * P30 })
             Assert.Equal(PrimalityVerdict.Composite, BigPrimality.Test(c));
-        // Below 2^64 the answer is exact: 2^61 - 1 is a Mersenne prime, 2^61 + 1 is divisible by 3 (common knowledge).
-        Assert.Equal(PrimalityVerdict.Prime, BigPrimality.Test((BigInteger.One << 61) - 1));
-        Assert.Equal(PrimalityVerdict.Composite, BigPrimality.Test((BigInteger.One << 61) + 1));
+        // Below 2^64 the answer is exact: the named numbers of the primality tests, with their sources there.
+        foreach (var (n, prime) in PrimalityTests.Named)
+            Assert.Equal(prime ? PrimalityVerdict.Prime : PrimalityVerdict.Composite, BigPrimality.Test(n));
     }
 
     [Fact]
