@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text.RegularExpressions;
 using FlowCert.Algebra;
 
 namespace FlowCert.Graphs;
@@ -10,10 +9,33 @@ namespace FlowCert.Graphs;
 /// names are turned into strings, each once, through one name table. A name already in the table was
 /// checked when it was first seen, so the name pattern runs once per distinct name.
 /// </remarks>
-public static partial class OgraphReader
+public static class OgraphReader
 {
-    [GeneratedRegex(@"^-?[0-9]{1,9}(\.[0-9]{1,9})?\z")]
-    private static partial Regex CoordinatePattern();
+    /// <summary>
+    /// Reads a coordinate of an <c>at</c> line: <c>-?[0-9]{1,9}(\.[0-9]{1,9})?</c>, as the decimal
+    /// <see cref="decimal.Parse(string)"/> gives (same value and scale), without a regular expression or the
+    /// general parser (a lattice file has an <c>at</c> line for every node).
+    /// </summary>
+    internal static bool TryParseCoordinate(ReadOnlySpan<char> t, out decimal value)
+    {
+        value = 0;
+        int i = t.Length > 0 && t[0] == '-' ? 1 : 0, start = i;
+        long mantissa = 0;
+        while (i < t.Length && t[i] is >= '0' and <= '9') mantissa = mantissa * 10 + (t[i++] - '0');
+        int whole = i - start, scale = 0;
+        if (whole is < 1 or > 9) return false;
+        if (i < t.Length && t[i] == '.')
+        {
+            int fraction = ++i;
+            while (i < t.Length && t[i] is >= '0' and <= '9') mantissa = mantissa * 10 + (t[i++] - '0');
+            scale = i - fraction;
+            if (scale is < 1 or > 9) return false;
+        }
+        if (i != t.Length) return false;
+        if (mantissa == 0) return decimal.TryParse(t, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture, out value); // the sign of a zero as the parser has it
+        value = new decimal((int)(uint)mantissa, (int)(uint)(mantissa >> 32), 0, start == 1, (byte)scale);
+        return true;
+    }
 
     /// <summary>True when the text is a valid node name (<see cref="NodeNameRule"/>).</summary>
     public static bool IsValidName(string name) => NodeNameRule.IsValid(name);
@@ -233,7 +255,7 @@ public static partial class OgraphReader
             for (int k = 0; k < 2; k++)
             {
                 var t = Tok(2 + k);
-                if (!CoordinatePattern().IsMatch(t) || !decimal.TryParse(t, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture, out coords[k]))
+                if (!TryParseCoordinate(t, out coords[k]))
                     throw Error(2 + k, $"bad coordinate '{Formats.Excerpt.Of(t.ToString())}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
             }
             references.Add((n, lineNo, starts[1] + 1, "at"));
