@@ -67,9 +67,8 @@ public static class OgraphReader
     /// <summary>The mutable state of one parse; names are interned to ids in order of first sight.</summary>
     private sealed class ParseState
     {
-        private readonly Dictionary<string, int> ids;
-        private readonly Dictionary<string, int>.AlternateLookup<ReadOnlySpan<char>> idLookup;
-        private readonly List<string> names = new();
+        private readonly NameTable ids = new();
+        private IReadOnlyList<string> names => ids.Names;
         private bool[] declared = new bool[16];
         private readonly List<int> edgeU = new(), edgeV = new();
         private readonly List<Rational> weights = new();
@@ -86,8 +85,6 @@ public static class OgraphReader
         {
             this.reader = reader;
             this.fileName = fileName;
-            ids = new Dictionary<string, int>(StringComparer.Ordinal);
-            idLookup = ids.GetAlternateLookup<ReadOnlySpan<char>>();
             weightCache = new Dictionary<string, Rational>(StringComparer.Ordinal);
             weightLookup = weightCache.GetAlternateLookup<ReadOnlySpan<char>>();
         }
@@ -176,12 +173,10 @@ public static class OgraphReader
         private int Name(int k)
         {
             var span = Tok(k);
-            if (idLookup.TryGetValue(span, out var id)) return id;
+            int id = ids.Find(span);
+            if (id >= 0) return id;
             if (!NodeNameRule.IsValid(span)) throw Error(k, NodeNameRule.Problem(span.ToString()));
-            var name = span.ToString();
-            id = names.Count;
-            ids.Add(name, id);
-            names.Add(name);
+            id = ids.Add(span.ToString());
             if (id == declared.Length) Array.Resize(ref declared, id * 2);
             return id;
         }
