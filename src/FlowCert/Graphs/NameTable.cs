@@ -33,7 +33,7 @@ internal sealed class NameTable
         }
     }
 
-    /// <summary>Adds a name that <see cref="Find"/> did not find; returns its id.</summary>
+    /// <summary>Adds a name that <see cref="Find(ReadOnlySpan{char})"/> did not find; returns its id.</summary>
     public int Add(string name)
     {
         if (2 * (names.Count + 1) > slots.Length) Grow();
