@@ -83,6 +83,27 @@ public class JsonReaderTests
         Assert.Contains("not JSON: nesting deeper than 64 levels", CheckText(new string('[', 1_000_000)).Err);
     }
 
+    // \u escapes decoded where the value matters (RFC 8259 section 7): hex digits in either case, and a
+    // surrogate pair read as the one character it encodes (echoed in the message about the flow kind).
+    [Theory]
+    [InlineData("f\\u006Cowcert-certificate")]
+    [InlineData("f\\u006cowcert-certificate")]
+    [InlineData("\\u0066lowcert-certificate")]
+    public void EscapedCharactersInAValueThatMattersAreDecoded(string format)
+    {
+        var r = CheckText(Wire.Replace("flowcert-certificate", format));
+        Assert.Equal("", r.Err);
+        Assert.Equal(0, r.Code);
+    }
+
+    [Fact]
+    public void ASurrogatePairIsOneCharacter()
+    {
+        var r = CheckText(Wire.Replace("\"flow\":\"causal\"", "\"flow\":\"x\\uD83D\\uDE00y\""));
+        Assert.NotEqual(0, r.Code);
+        Assert.Contains("x\U0001F600y", r.Out + r.Err);
+    }
+
     [Fact]
     public void EscapesWhiteSpaceAndKeyOrderDoNotMatter()
     {
