@@ -36,8 +36,9 @@ public sealed class Field
     public Rational? ParseNonZero(string text)
     {
         if (seen.TryGetValue(text, out var known)) return known;
-        Rational? answer = Rational.ParseCanonical(text) is not { } r || r.Num.IsZero ? null
-            : P.IsZero || (r.Den.IsOne && r.Num.Sign > 0 && r.Num < P) ? r : null;
+        Rational? answer = Rational.ParseCanonical(text) is not { } r ? null
+            : P.IsZero ? (r.Num.IsZero ? null : r) : r.Den.IsOne && r.Num.Sign > 0 && r.Num < P ? r : null;
+        // Stryker disable once all: the bounds of the cache change only time and memory, not an answer
         if (seen.Count < 4096 && text.Length <= 40) seen[text] = answer;
         return answer;
     }

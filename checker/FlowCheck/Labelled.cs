@@ -36,18 +36,18 @@ public static class Labelled
                 else throw new InvalidCertificate($"unknown key \"{Json.Cut(k)}\" in {what}");
             if (rows is null || self is null) throw new InvalidCertificate($"missing {what}.{(rows is null ? "rows" : "self")}");
             Json.SortedUnique(rows, $"{what}.rows");
-            var (lv, sum, rhs) = (g.Graph.Label(v), new int[g.Count], self.Value);
+            var (lv, odd, rhs) = (g.Graph.Label(v), new bool[g.Count], self.Value); // odd[c]: y^T M at column c, in F2
             var hasSelfRow = lv is "XZ" or "YZ" or "Z";
-            if (rhs) sum[v] = hasSelfRow ? 1 : throw new InvalidCertificate($"{what}: {key} is labelled {lv} and has no self row");
+            if (rhs) odd[v] = hasSelfRow ? true : throw new InvalidCertificate($"{what}: {key} is labelled {lv} and has no self row");
             foreach (var row in rows)
             {
                 if (!g.Graph.Index.TryGetValue(row, out var r) || !u[r] || g.Graph.Label(r) == "Z") throw new InvalidCertificate($"{what}: {Json.Cut(row)} has no row in the system of {key}");
-                foreach (var (c, _) in g.Neighbours(r)) sum[c]++;
-                if (g.Graph.Label(r) == "Y") sum[r]++;
+                foreach (var (c, _) in g.Neighbours(r)) odd[c] = !odd[c];
+                if (g.Graph.Label(r) == "Y") odd[r] = !odd[r];
                 if (r == v && lv != "YZ") rhs = !rhs;
             }
             for (var c = 0; c < g.Count; c++)
-                if (sum[c] % 2 != 0 && !g.IsInput(c) && (!u[c] || g.Graph.Label(c) is "X" or "Y" || (c == v && hasSelfRow)))
+                if (odd[c] && !g.IsInput(c) && (!u[c] || g.Graph.Label(c) is "X" or "Y" || (c == v && hasSelfRow)))
                     throw new InvalidCertificate($"{what}: (y^T M)({g.Name(c)}) = 1 for unknown p({g.Name(c)}), not 0");
             if (!rhs) throw new InvalidCertificate($"{what}: y^T b = 0, not 1");
             seen[v] = true;

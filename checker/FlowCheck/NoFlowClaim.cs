@@ -26,19 +26,20 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress, bo
     /// <summary>Every corrector has a number of neighbours in U other than exactly one.</summary>
     void CheckCausal(List<int> blocked)
     {
-        var count = new int[g.Count];
-        foreach (var (w, _) in blocked.SelectMany(x => g.Neighbours(x)).Where(e => IsCorrector(e.Node))) count[w]++;
-        foreach (var (w, x) in Enumerable.Range(0, g.Count).Where(w => count[w] == 1).Select(w => (w, blocked.First(x => g.Neighbours(x).Any(e => e.Node == w)))))
-            throw new InvalidCertificate($"corrector {g.Name(w)} has exactly one neighbour in the blocked set ({g.Name(x)}), so it could correct {g.Name(x)}");
+        var (count, via) = (new int[g.Count], new int[g.Count]); // via[w]: a neighbour of w in U
+        foreach (var x in blocked)
+            foreach (var (w, _) in g.Neighbours(x).Where(e => IsCorrector(e.Node))) (count[w], via[w]) = (count[w] + 1, x);
+        foreach (var w in Enumerable.Range(0, g.Count).Where(w => count[w] == 1))
+            throw new InvalidCertificate($"corrector {g.Name(w)} has exactly one neighbour in the blocked set ({g.Name(via[w])}), so it could correct {g.Name(via[w])}");
     }
 
     /// <summary>Each witness y has y^T A[U, C] = 0, entries non-zero on U; the supports cover U.</summary>
     void CheckWitnesses(Json json, List<int> blocked)
     {
-        var (covered, product) = (new bool[g.Count], new Dictionary<int, Rational>());
+        var covered = new bool[g.Count];
         foreach (var i in json.At("obstruction", "witnesses", "obstruction.witnesses").Items("obstruction.witnesses"))
         {
-            var what = $"obstruction.witnesses[{i}]";
+            var (what, product) = ($"obstruction.witnesses[{i}]", new Dictionary<int, Rational>());
             foreach (var key in json.NodeMap(what))
             {
                 var text = json.String(what, key);
@@ -51,7 +52,6 @@ public sealed class NoFlowClaim(FieldGraph g, bool causal, Progress progress, bo
             }
             foreach (var w in product.Keys.Order().Where(w => !product[w].Num.IsZero))
                 throw new InvalidCertificate($"{what}: (y^T A)({g.Name(w)}) = {product[w].Show()} for corrector {g.Name(w)}, not 0");
-            product.Clear();
             if (progress.Due) progress.Show($"witnesses checked: {i + 1:N0} (blocked set of {blocked.Count:N0})");
         }
         foreach (var v in blocked.Where(v => !covered[v]))

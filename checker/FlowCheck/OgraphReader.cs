@@ -42,6 +42,7 @@ public static class OgraphReader
                     if (u == v) throw Error(2, $"self-loop on {u}");
                     var w = tokens.Count == 4 ? Rational.ParseWeight(tokens[3].Text) : Rational.One;
                     if (w is not { } weight || weight.Num.IsZero) throw Error(3, $"bad or zero weight \"{tokens[3].Text}\"");
+                    // Stryker disable once Equality: u and v differ here (a self-loop is refused above)
                     var key = string.CompareOrdinal(u, v) < 0 ? (u, v) : (v, u);
                     if (edges.TryGetValue(key, out var first)) throw Error(0, $"edge {u} {v} given twice (lines {first.Line} and {line})");
                     edges[key] = (weight, line);

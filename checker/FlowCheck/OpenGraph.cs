@@ -43,11 +43,10 @@ public static class CanonicalForm
 
     public static string Sha256(IEnumerable<string> lines)
     {
-        using var hash = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
-        var text = new StringBuilder();
-        foreach (var line in lines)
-            if (text.Append(line).Length > 1 << 15) { hash.AppendData(Encoding.UTF8.GetBytes(text.ToString())); text.Clear(); }
-        hash.AppendData(Encoding.UTF8.GetBytes(text.ToString()));
-        return Convert.ToHexStringLower(hash.GetHashAndReset());
+        using var sha = SHA256.Create();
+        using (var stream = new CryptoStream(Stream.Null, sha, CryptoStreamMode.Write))
+        using (var text = new StreamWriter(stream, new UTF8Encoding(false), 1 << 15))
+            foreach (var line in lines) text.Write(line);
+        return Convert.ToHexStringLower(sha.Hash!);
     }
 }

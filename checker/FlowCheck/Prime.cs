@@ -17,7 +17,7 @@ public static class Prime
         foreach (var b in Bases)
             if (n % b == 0) return n == b;
         var (d, s) = (n - 1, 0);
-        while (d.IsEven) { d >>= 1; s++; }
+        while (d.IsEven) { d /= 2; s++; }
         return Bases.All(b => PassesRound(n, d, s, b));
     }
 

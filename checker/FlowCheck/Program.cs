@@ -7,10 +7,12 @@ public static class Program
 {
     public const string Usage = "usage: flowcheck CERT [--graph GRAPH] [--quiet] | --help | --version";
 
-    public static int Main(string[] args) => Run(args, Console.Out, Console.Error, !Console.IsErrorRedirected);
+    // Stryker disable once Conditional: whether standard error is a terminal cannot be changed from a test
+    public static int Main(string[] args) => Run(args, Console.Out, Console.Error, Console.IsErrorRedirected ? null : (1000, 200));
 
-    /// <summary>Runs the checker; <paramref name="terminal"/> (standard error is a terminal) allows progress lines.</summary>
-    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, bool terminal = false)
+    /// <summary>Runs the checker; <paramref name="progress"/> is null when standard error is not a terminal, else how
+    /// long a run goes before it shows a progress line there and how often the line is redrawn (milliseconds).</summary>
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr, (long AfterMs, long EveryMs)? progress = null)
     {
         if (args is ["--help" or "-h"])
         {
@@ -21,18 +23,18 @@ public static class Program
         if (args is ["--version"]) { stdout.WriteLine($"flowcheck {typeof(Program).Assembly.GetName().Version?.ToString(3)}"); return 0; }
         if (Arguments(args.Where(a => a != "--quiet").ToArray()) is not var (certPath, graphPath))
         { stderr.WriteLine(Usage); return 2; }
-        var progress = new Progress(terminal && !args.Contains("--quiet") ? stderr : null);
+        var meter = new Progress(progress is not null && !args.Contains("--quiet") ? stderr : null, progress ?? (0, 0));
         try
         {
             var fileGraph = graphPath is null ? null : OgraphReader.Read(graphPath);
-            using var json = new Json(certPath, progress);
-            var lines = Certificate.Check(json, fileGraph, graphPath, progress);
-            progress.Done();
+            using var json = new Json(certPath, meter);
+            var lines = Certificate.Check(json, fileGraph, graphPath, meter);
+            meter.Done();
             foreach (var line in lines) stdout.WriteLine(line);
             return 0;
         }
-        catch (InvalidCertificate e) { progress.Done(); stdout.WriteLine($"invalid: {OneLine(e.Message)}"); return 1; }
-        catch (UnreadableInput e) { progress.Done(); stderr.WriteLine($"unreadable: {OneLine(e.Message)}"); return 2; }
+        catch (InvalidCertificate e) { meter.Done(); stdout.WriteLine($"invalid: {OneLine(e.Message)}"); return 1; }
+        catch (UnreadableInput e) { meter.Done(); stderr.WriteLine($"unreadable: {OneLine(e.Message)}"); return 2; }
     }
 
     /// <summary>Control characters from the input (a newline in a name, say) are shown as \uXXXX escapes.</summary>
@@ -51,21 +53,24 @@ public static class Program
     }
 }
 
-/// <summary>One progress line on a terminal's standard error, shown once a run has taken a second, redrawn at
-/// most five times a second and erased at the end; silent when <paramref name="terminal"/> is null.</summary>
-public sealed class Progress(TextWriter? terminal)
+/// <summary>One progress line on a terminal's standard error, shown once a run has taken <c>AfterMs</c> (a second
+/// from the command line), redrawn at most every <c>EveryMs</c> (200) and erased at the end; silent when
+/// <paramref name="terminal"/> is null.</summary>
+public sealed class Progress(TextWriter? terminal, (long AfterMs, long EveryMs) timing)
 {
     readonly Stopwatch clock = Stopwatch.StartNew();
-    long shown = -1;
+    long next = timing.AfterMs;
+    bool shown;
 
-    /// <summary>True when a line is due (a terminal, a second gone, 200 ms since the last one); the caller then calls <see cref="Show"/>.</summary>
-    public bool Due => terminal is not null && clock.ElapsedMilliseconds >= 1000 && clock.ElapsedMilliseconds - shown >= 200;
+    /// <summary>True when a line is due; the caller then calls <see cref="Show"/>.</summary>
+    public bool Due => terminal is not null && clock.ElapsedMilliseconds >= next;
 
     public void Show(string what)
     {
-        shown = clock.ElapsedMilliseconds;
-        terminal!.Write($"\r{$"flowcheck: {what}, {shown / 1000.0:F1} s elapsed",-79}");
+        var now = clock.ElapsedMilliseconds;
+        (next, shown) = (now + timing.EveryMs, true);
+        terminal!.Write($"\r{$"flowcheck: {what}, {now / 1000.0:F1} s elapsed",-79}");
     }
 
-    public void Done() { if (shown >= 0) terminal!.Write("\r" + new string(' ', 79) + "\r"); shown = -1; }
+    public void Done() { if (shown) terminal!.Write("\r" + new string(' ', 79) + "\r"); shown = false; }
 }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Numerics;
 using System.Text.RegularExpressions;
 
@@ -14,6 +13,7 @@ public readonly record struct Rational
 
     public Rational(BigInteger num, BigInteger den)
     {
+        // Stryker disable once Equality: a denominator is never 0 here (the readers refuse one, and only non-zero elements are inverted)
         if (den.Sign < 0) { num = -num; den = -den; }
         var gcd = BigInteger.GreatestCommonDivisor(num, den);
         (Num, Den) = (num / gcd, den / gcd);
@@ -49,10 +49,9 @@ public readonly record struct Rational
     /// <remarks>Checked by shape and by the reduced denominator, not by printing (printing a long number is quadratic).</remarks>
     public static Rational? ParseCanonical(string text)
     {
-        if (text.Length is > 0 and < 19 && long.TryParse(text, CultureInfo.InvariantCulture, out var small) && small.ToString(CultureInfo.InvariantCulture) == text) return new Rational(small, 1);
         if (!CanonicalShape.IsMatch(text) || ParseWeight(text) is not { } r) return null;
-        var slash = text.IndexOf('/');
-        return slash < 0 ? r : !r.Den.IsOne && r.Den == BigInteger.Parse(text.AsSpan(slash + 1)) ? r : null;
+        var parts = text.Split('/');
+        return parts.Length == 1 || (!r.Den.IsOne && r.Den == BigInteger.Parse(parts[1])) ? r : null;
     }
 
     static readonly Regex CanonicalShape = new(@"^(0|-?[1-9][0-9]*)(/[1-9][0-9]*)?\z");
