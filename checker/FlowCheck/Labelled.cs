@@ -10,16 +10,18 @@ public static class Labelled
     public static void CheckCorrection(FieldGraph g, int v, HashSet<int> p, Func<int, bool> later, string who)
     {
         var odd = p.SelectMany(u => g.Neighbours(u)).GroupBy(e => e.Node).Where(e => e.Count() % 2 == 1).Select(e => e.Key).ToHashSet();
-        string name = g.Name(v), l;
+        var name = g.Name(v);
         foreach (var w in Enumerable.Range(0, g.Count).Where(w => w != v && !g.IsOutput(w) && !later(w)))
         {
-            if (p.Contains(w) && (l = g.Graph.Label(w)) is not ("X" or "Y")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in p_{name} but not later");
-            if (odd.Contains(w) && (l = g.Graph.Label(w)) is not ("Y" or "Z")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in Odd(p_{name}) but not later");
-            if (g.Graph.Label(w) == "Y" && p.Contains(w) != odd.Contains(w))
+            var l = g.Graph.Label(w);
+            if (p.Contains(w) && l is not ("X" or "Y")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in p_{name} but not later");
+            if (odd.Contains(w) && l is not ("Y" or "Z")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in Odd(p_{name}) but not later");
+            if (l == "Y" && p.Contains(w) != odd.Contains(w))
                 throw new InvalidCertificate($"{who}: {g.Name(w)} is labelled Y and not later, but is in only one of p_{name} and Odd(p_{name})");
         }
-        bool inP = p.Contains(v), inOdd = odd.Contains(v);
-        if (!((l = g.Graph.Label(v)) switch { "XY" => !inP && inOdd, "XZ" => inP && inOdd, "YZ" => inP && !inOdd, "X" => inOdd, "Z" => inP, _ => inP != inOdd })) throw new InvalidCertificate($"{who}: labelled {l}, but {name} in p_{name} is {inP} and {name} in Odd(p_{name}) is {inOdd}");
+        var (lv, inP, inOdd) = (g.Graph.Label(v), p.Contains(v), odd.Contains(v));
+        if (!(lv switch { "XY" => !inP && inOdd, "XZ" => inP && inOdd, "YZ" => inP && !inOdd, "X" => inOdd, "Z" => inP, _ => inP != inOdd }))
+            throw new InvalidCertificate($"{who}: labelled {lv}, but {name} in p_{name} is {inP} and {name} in Odd(p_{name}) is {inOdd}");
     }
 
     /// <summary>Flows.md 9.5: for each v in U, y_v (rows of v's system, and its self row) has y^T M_v = 0 and y^T b_v = 1.</summary>
