@@ -16,12 +16,10 @@ public static class Labelled
             var l = g.Graph.Label(w);
             if (p.Contains(w) && l is not ("X" or "Y")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in p_{name} but not later");
             if (odd.Contains(w) && l is not ("Y" or "Z")) throw new InvalidCertificate($"{who}: {g.Name(w)} (labelled {l}) is in Odd(p_{name}) but not later");
-            if (l == "Y" && p.Contains(w) != odd.Contains(w))
-                throw new InvalidCertificate($"{who}: {g.Name(w)} is labelled Y and not later, but is in only one of p_{name} and Odd(p_{name})");
+            if (l == "Y" && p.Contains(w) != odd.Contains(w)) throw new InvalidCertificate($"{who}: {g.Name(w)} is labelled Y and not later, but is in only one of p_{name} and Odd(p_{name})");
         }
         var (lv, inP, inOdd) = (g.Graph.Label(v), p.Contains(v), odd.Contains(v));
-        if (!(lv switch { "XY" => !inP && inOdd, "XZ" => inP && inOdd, "YZ" => inP && !inOdd, "X" => inOdd, "Z" => inP, _ => inP != inOdd }))
-            throw new InvalidCertificate($"{who}: labelled {lv}, but {name} in p_{name} is {inP} and {name} in Odd(p_{name}) is {inOdd}");
+        if (!(lv switch { "XY" => !inP && inOdd, "XZ" => inP && inOdd, "YZ" => inP && !inOdd, "X" => inOdd, "Z" => inP, _ => inP != inOdd })) throw new InvalidCertificate($"{who}: labelled {lv}, but {name} in p_{name} is {inP} and {name} in Odd(p_{name}) is {inOdd}");
     }
 
     /// <summary>Flows.md 9.5: for each v in U, y_v (rows of v's system, and its self row) has y^T M_v = 0 and y^T b_v = 1.</summary>
