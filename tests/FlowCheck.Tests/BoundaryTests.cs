@@ -66,6 +66,8 @@ public class JsonBoundaryTests
             Assert.Equal(2, r.Code);
             Assert.Contains("not JSON: lone high surrogate", r.Err);
         }
+        // U+DFFF is the last low surrogate; U+E000, the first character after the surrogates, stands alone.
+        AssertInvalid(Unknown("\\ue000"), "unknown flow \"\ue000\"");
         foreach (var bad in new[] { "\\udc00", "\\udfff" })
             Assert.Contains("not JSON: lone low surrogate", Unknown(bad).Err);
     }
@@ -123,7 +125,7 @@ public class JsonBoundaryTests
     }
 
     [Fact]
-    public void ACertificateFromAPipeIsReadWhole()
+    public async Task ACertificateFromAPipeIsReadWhole()
     {
         // A FIFO cannot seek: the reader copies it first (mkfifo, GNU coreutils, as on every Debian system).
         var fifo = Path.Combine(Path.GetTempPath(), "flowcheck-fifo-" + Guid.NewGuid().ToString("N"));
@@ -132,7 +134,7 @@ public class JsonBoundaryTests
         {
             var writer = Task.Run(() => File.WriteAllText(fifo, Wire));
             var r = Run(fifo);
-            writer.Wait();
+            await writer;
             Assert.Equal("", r.Err);
             Assert.StartsWith("valid: causal flow over Q, depth 2", r.First);
         }
@@ -153,6 +155,7 @@ public class ShapeMessageTests
         AssertInvalid(Edit(Examples.WireCausal(), c => c.Remove(key), rehash: false), $"invalid: missing {key}");
         AssertInvalid(Edit(Examples.WireCausal(), c => c[key] = 1.5, rehash: false), $"invalid: {key} must be a string, found float");
         AssertInvalid(Edit(Examples.WireCausal(), c => c[key] = true, rehash: false), $"invalid: {key} must be a string, found boolean");
+        AssertInvalid(Edit(Examples.WireCausal(), c => c[key] = false, rehash: false), $"invalid: {key} must be a string, found boolean");
         AssertInvalid(Edit(Examples.WireCausal(), c => c[key] = 7, rehash: false), $"invalid: {key} must be a string, found integer");
     }
 
@@ -258,6 +261,7 @@ public class LabelledWitnessShapeTests
         AssertInvalid(With("{'a':{'rows':['i'],'self':true,'x':1},'i':{'rows':['i'],'self':false}}"), "invalid: unknown key \"x\" in obstruction.witnesses.a");
         AssertInvalid(With("{'a':{'self':true},'i':{'rows':['i'],'self':false}}"), "invalid: missing obstruction.witnesses.a.rows");
         AssertInvalid(With("{'a':{'rows':['i']},'i':{'rows':['i'],'self':false}}"), "invalid: missing obstruction.witnesses.a.self");
+        AssertInvalid(With("{'a':{'rows':'i','self':true},'i':{'rows':['i'],'self':false}}"), "invalid: obstruction.witnesses.a.rows must be an array, found string");
         AssertInvalid(With("{'a':{'rows':['i'],'self':1},'i':{'rows':['i'],'self':false}}"), "invalid: obstruction.witnesses.a.self must be true or false, found integer");
         AssertInvalid(With("{'a':{'rows':['i','a'],'self':true},'i':{'rows':['i'],'self':false}}"), "invalid: obstruction.witnesses.a.rows: \"a\" after \"i\"");
         AssertInvalid(With("{'a':{'rows':['i','i'],'self':true},'i':{'rows':['i'],'self':false}}"), "invalid: obstruction.witnesses.a.rows: \"i\" after \"i\"");
@@ -307,6 +311,34 @@ public class ProgressLineTests
         var unreadable = RunShowing(Write(Examples.WireCausal().ToString() + "x", ".json"));
         Assert.Equal(2, unreadable.Code);
         Assert.Matches("^\rflowcheck: reading: .*\r {79}\runreadable: .*content after the JSON value", unreadable.Err);
+    }
+
+    static int Lines(string err) => err.Split("\rflowcheck: ").Length - 1;
+
+    [Fact]
+    public void ALineWaitsForItsDelayAndIsRedrawnNoSoonerThanItsInterval()
+    {
+        var cert = Write(Examples.WireCausal().ToString(), ".json");
+        var (stdout, stderr) = (new StringWriter(), new StringWriter());
+        Assert.Equal(0, Program.Run([cert], stdout, stderr, progress: (3_600_000, 0)));
+        Assert.Equal("", stderr.ToString());
+        Assert.True(Lines(RunShowing(cert).Err) >= 2);
+        (stdout, stderr) = (new StringWriter(), new StringWriter());
+        Assert.Equal(0, Program.Run([cert], stdout, stderr, progress: (0, 3_600_000)));
+        Assert.Equal(1, Lines(stderr.ToString()));
+    }
+
+    [Fact]
+    public void ALineIsErasedOnce()
+    {
+        var terminal = new StringWriter();
+        var meter = new Progress(terminal, (0, 0));
+        meter.Done();
+        Assert.Equal("", terminal.ToString());
+        meter.Show("stage");
+        meter.Done();
+        meter.Done();
+        Assert.Matches(@"^\rflowcheck: stage, \d+\.\d s elapsed +\r {79}\r$", terminal.ToString());
     }
 
     [Fact]
