@@ -24,7 +24,9 @@ internal sealed class SparseElimination<T, TField> : IEliminationResult<T> where
         reduced = new SparseVector<T>[m];
         transform = new SparseVector<T>[m];
         isPivotRow = new bool[m];
-        var occurrences = new Dictionary<int, List<int>>();
+        int entries = 0;
+        for (int r = 0; r < m; r++) entries += rows[r].Count;
+        var occurrences = new Dictionary<int, List<int>>(entries); // at most one column per entry: never rehashed
         for (int r = 0; r < m; r++)
         {
             reduced[r] = rows[r];
@@ -44,9 +46,12 @@ internal sealed class SparseElimination<T, TField> : IEliminationResult<T> where
             }
             if (pivot < 0) continue;
             var inv = f.Inverse(reduced[pivot].Get(f, col));
-            reduced[pivot] = reduced[pivot].Scale(f, inv);
-            transform[pivot] = transform[pivot].Scale(f, inv);
-            foreach (var r in holders.Distinct().ToArray())
+            if (!f.AreEqual(inv, f.One))
+            {
+                reduced[pivot] = reduced[pivot].Scale(f, inv);
+                transform[pivot] = transform[pivot].Scale(f, inv);
+            }
+            foreach (var r in holders.Count == 1 ? holders : holders.Distinct().ToList())
             {
                 if (r == pivot) continue;
                 var entry = reduced[r].Get(f, col);
@@ -96,7 +101,7 @@ internal sealed class SparseElimination<T, TField> : IEliminationResult<T> where
     {
         var blocked = new HashSet<int>();
         foreach (var y in LeftKernel()) foreach (var r in y.Indices) blocked.Add(r);
-        var entries = new Dictionary<int, List<(int Col, T Val)>>();
+        var entries = new Dictionary<int, List<(int Col, T Val)>>(isPivotRow.Length);
         foreach (var (col, p) in pivots)
         {
             var t = transform[p];
@@ -108,13 +113,16 @@ internal sealed class SparseElimination<T, TField> : IEliminationResult<T> where
                 list.Add((col, t.Values[k]));
             }
         }
-        var result = new Dictionary<int, SparseVector<T>>();
+        var result = new Dictionary<int, SparseVector<T>>(isPivotRow.Length);
         for (int r = 0; r < isPivotRow.Length; r++)
         {
             if (blocked.Contains(r)) continue;
-            var list = entries.TryGetValue(r, out var l) ? l : [];
-            list.Sort((a, b) => a.Col.CompareTo(b.Col));
-            result[r] = new SparseVector<T>(list.Select(e => e.Col).ToArray(), list.Select(e => e.Val).ToArray());
+            if (!entries.TryGetValue(r, out var list)) { result[r] = new SparseVector<T>([], []); continue; }
+            var cols = new int[list.Count];
+            var vals = new T[list.Count];
+            for (int k = 0; k < list.Count; k++) (cols[k], vals[k]) = list[k];
+            Array.Sort(cols, vals);
+            result[r] = new SparseVector<T>(cols, vals);
         }
         return result;
     }

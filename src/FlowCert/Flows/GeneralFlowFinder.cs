@@ -24,17 +24,20 @@ internal static class GeneralFlowFinder
         {
             var nb = g.Neighbours[rows[r]];
             var wt = g.Weights[rows[r]];
-            var idx = new List<int>();
-            var val = new List<T>();
-            for (int k = 0; k < nb.Length; k++)
-                if (state.IsCorrector[nb[k]]) { idx.Add(nb[k]); val.Add(wt[k]); }
-            matrix[r] = new SparseVector<T>(idx.ToArray(), val.ToArray());
+            int count = 0;
+            foreach (var w in nb) if (state.IsCorrector[w]) count++;
+            var (idx, val) = (new int[count], new T[count]);
+            for (int k = 0, n = 0; k < nb.Length; k++)
+                if (state.IsCorrector[nb[k]]) (idx[n], val[n++]) = (nb[k], wt[k]);
+            matrix[r] = new SparseVector<T>(idx, val);
         }
         var elimination = Elimination.Run(f, matrix);
         var solutions = elimination.SolveUnitVectors();
         if (solutions.Count == 0)
             return LayerOutcome.Stuck(Obstruction(g, state.Unprocessed(), rows, elimination));
-        return LayerOutcome.Found(solutions.ToDictionary(s => rows[s.Key], s => LayeredSearch.ToNodeVector(g, s.Value.Indices, s.Value.Values)));
+        var layer = new Dictionary<int, NodeVector>(solutions.Count);
+        foreach (var (r, c) in solutions) layer[rows[r]] = NodeVector.Take(g.Spec, c.Indices, c.Values); // the solutions are made afresh for this layer
+        return LayerOutcome.Found(layer);
     }
 
     /// <summary>

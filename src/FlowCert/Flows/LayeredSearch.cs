@@ -21,7 +21,7 @@ internal static class LayeredSearch
         where T : struct where TField : struct, IField<T>
     {
         var state = new LayerState(g.Neighbours, g.Graph.Inputs, g.Graph.Outputs);
-        var corrections = new Dictionary<int, NodeVector>();
+        var corrections = new Dictionary<int, NodeVector>(state.UnprocessedCount); // its final size when there is a flow
         BlockedSet? blocked = null;
         while (state.UnprocessedCount > 0 && blocked is null)
         {

@@ -43,12 +43,15 @@ public sealed class NodeVector
     /// <paramref name="field"/>; a node given twice is an error.
     /// </summary>
     public static NodeVector Create<T>(FieldSpec field, IReadOnlyList<int> nodes, IReadOnlyList<T> values) where T : struct
+        => Take(field, nodes.ToArray(), values.ToArray());
+
+    /// <summary>As <see cref="Create{T}"/>, but the vector takes the arrays over (sorting them in place when
+    /// they are not sorted): for a caller that made them and does not touch them again.</summary>
+    internal static NodeVector Take<T>(FieldSpec field, int[] n, T[] v) where T : struct
     {
-        if (nodes.Count != values.Count) throw new ArgumentException("nodes and values differ in length");
+        if (n.Length != v.Length) throw new ArgumentException("nodes and values differ in length");
         if (typeof(T) != (field.IsRationals ? typeof(Rational) : typeof(ulong)))
             throw new ArgumentException($"{typeof(T).Name} is not the element type of {field.Name}");
-        var n = nodes.ToArray();
-        var v = values.ToArray();
         bool sorted = true;
         for (int k = 1; k < n.Length; k++) if (n[k - 1] >= n[k]) { sorted = false; break; }
         if (!sorted)
