@@ -71,27 +71,32 @@ public static class OgraphReader
         private IReadOnlyList<string> names => ids.Names;
         private bool[] declared = new bool[16];
         private readonly List<int> edgeU = new(), edgeV = new();
-        private readonly List<Rational> weights = new();
+        // Each edge's weight as an index into weightTable (a file has few distinct weights; often only 1).
+        private readonly List<int> weightIds = new();
+        private readonly List<Rational> weightTable = [Rational.One];
         // Where each edge's first name is (line, column), for the repeated-edge error found in Build.
         private readonly List<int> edgeLines = new(), edgeColumns = new();
         private readonly Dictionary<int, int> inputs = new(), outputs = new();
-        private readonly List<(int Id, int Line, int Column, string Keyword)> references = new();
-        private readonly Dictionary<int, PositionHint> positions = new();
+        // Names used before their declaration may come: checked in Build. Keyword is an index into Keywords.
+        private readonly List<(int Id, int Line, int Column, int Keyword)> references = new();
+        private static readonly string[] Keywords = ["input", "output", "at", "measure"];
+        // Every 'at' line in file order (a later line for the same node wins).
+        private readonly List<(int Id, PositionHint Hint)> positions = new();
         private readonly Dictionary<int, (MeasurementLabel Label, int Line, int Column)> labels = new();
-        private readonly Dictionary<string, Rational> weightCache;
-        private readonly Dictionary<string, Rational>.AlternateLookup<ReadOnlySpan<char>> weightLookup;
+        private readonly Dictionary<string, int> weightCache;
+        private readonly Dictionary<string, int>.AlternateLookup<ReadOnlySpan<char>> weightLookup;
 
         public ParseState(TextReader reader, string fileName)
         {
             this.reader = reader;
             this.fileName = fileName;
-            weightCache = new Dictionary<string, Rational>(StringComparer.Ordinal);
+            weightCache = new Dictionary<string, int>(StringComparer.Ordinal);
             weightLookup = weightCache.GetAlternateLookup<ReadOnlySpan<char>>();
         }
 
         private readonly TextReader reader;
         private readonly string fileName;
-        // The reader's text arrives in chunks; the current line is assembled in lineBuffer.
+        // The reader's text arrives in chunks; a line that spans two chunks is assembled in lineBuffer.
         private readonly char[] chunk = new char[1 << 16];
         private int chunkPos, chunkLen;
         private char[] lineBuffer = new char[256];
@@ -133,6 +138,13 @@ public static class OgraphReader
                 int nl = Array.IndexOf(chunk, '\n', chunkPos, chunkLen - chunkPos);
                 int end = nl < 0 ? chunkLen : nl;
                 int take = end - chunkPos;
+                if (nl >= 0 && length == 0 && take <= MaxLineLength)
+                {
+                    // The whole line is in this chunk, which stays unchanged until the next call: no copy.
+                    line = chunk.AsMemory(chunkPos, take);
+                    chunkPos = nl + 1;
+                    return true;
+                }
                 if (length + take > MaxLineLength)
                     throw new GraphFormatException(fileName, lineNo, 1, $"line {lineNo} is longer than {MaxLineLength} characters");
                 if (length + take > lineBuffer.Length) Array.Resize(ref lineBuffer, Math.Max(length + take, lineBuffer.Length * 2));
@@ -211,7 +223,7 @@ public static class OgraphReader
                 if (target.TryGetValue(n, out var first))
                     throw Error(k, $"node {names[n]} is listed twice as {keyword} (lines {first} and {lineNo})");
                 target[n] = lineNo;
-                references.Add((n, lineNo, starts[k] + 1, keyword));
+                references.Add((n, lineNo, starts[k] + 1, Array.IndexOf(Keywords, keyword)));
             }
         }
 
@@ -221,14 +233,14 @@ public static class OgraphReader
                 throw Error(count > 4 ? 4 : 0, "'edge' takes two node names and an optional weight");
             int u = Name(1), v = Name(2);
             if (u == v) throw Error(2, $"self-loop on node {names[u]}: a graph state has no edge from a node to itself");
-            var w = Rational.One;
-            if (count == 4) w = Weight(u, v);
+            int w = count == 4 ? Weight(u, v) : 0;
             edgeLines.Add(lineNo); edgeColumns.Add(starts[1] + 1); // repeats are found in Build, by sorting
             declared[u] = true; declared[v] = true;
-            edgeU.Add(u); edgeV.Add(v); weights.Add(w);
+            edgeU.Add(u); edgeV.Add(v); weightIds.Add(w);
         }
 
-        private Rational Weight(int u, int v)
+        /// <summary>The weight of token 3 as an index into <see cref="weightTable"/>.</summary>
+        private int Weight(int u, int v)
         {
             var span = Tok(3);
             if (weightLookup.TryGetValue(span, out var cached)) return cached;
@@ -238,8 +250,9 @@ public static class OgraphReader
                     ? $"bad weight '{Formats.Excerpt.Of(s)}': its exponent is beyond ±{Formats.ExactDecimal.MaxExponent}; weights are exact, so such a number would have thousands of digits"
                     : $"bad weight '{Formats.Excerpt.Of(s)}': write an integer, a/b or a decimal such as 0.25");
             if (w.IsZero) throw Error(3, $"weight of edge {names[u]} {names[v]} is zero: leave the edge out instead");
-            if (weightCache.Count < WeightCacheLimit) weightCache[s] = w;
-            return w;
+            weightTable.Add(w);
+            if (weightCache.Count < WeightCacheLimit) weightCache[s] = weightTable.Count - 1;
+            return weightTable.Count - 1;
         }
 
         private void At()
@@ -253,8 +266,8 @@ public static class OgraphReader
                 if (!TryParseCoordinate(t, out coords[k]))
                     throw Error(2 + k, $"bad coordinate '{Formats.Excerpt.Of(t.ToString())}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
             }
-            references.Add((n, lineNo, starts[1] + 1, "at"));
-            positions[n] = new PositionHint(coords[0], coords[1]);
+            references.Add((n, lineNo, starts[1] + 1, 2));
+            positions.Add((n, new PositionHint(coords[0], coords[1])));
         }
 
         private void Measure()
@@ -266,7 +279,7 @@ public static class OgraphReader
             if (labels.TryGetValue(n, out var first))
                 throw Error(1, $"node {names[n]} has two labels (lines {first.Line} and {lineNo})");
             labels[n] = (label, lineNo, starts[1] + 1);
-            references.Add((n, lineNo, starts[1] + 1, "measure"));
+            references.Add((n, lineNo, starts[1] + 1, 3));
         }
 
         /// <summary>
@@ -293,6 +306,32 @@ public static class OgraphReader
                 $"edge {names[edgeU[worst]]} {names[edgeV[worst]]} appears twice (lines {edgeLines[worstFirst]} and {edgeLines[worst]})");
         }
 
+        /// <summary>
+        /// The edges as keys (U &lt;&lt; 32) | V with U &lt; V node indices, sorted, and the edge each came from:
+        /// a counting sort by U (linear in nodes and edges), then each run of one U sorted by V (short runs
+        /// in a sparse graph).
+        /// </summary>
+        private (long[] Keys, int[] ByKey) SortedEdgeKeys(int[] rank, int nodeCount)
+        {
+            int m = edgeU.Count;
+            var start = new int[nodeCount + 1];
+            for (int e = 0; e < m; e++) start[Math.Min(rank[edgeU[e]], rank[edgeV[e]]) + 1]++;
+            for (int i = 0; i < nodeCount; i++) start[i + 1] += start[i];
+            var keys = new long[m];
+            var byKey = new int[m];
+            for (int e = 0; e < m; e++)
+            {
+                int a = rank[edgeU[e]], b = rank[edgeV[e]];
+                int pos = start[Math.Min(a, b)]++;
+                keys[pos] = ((long)Math.Min(a, b) << 32) | (uint)Math.Max(a, b);
+                byKey[pos] = e;
+            }
+            // start[i] is now the end of run i, which begins at start[i - 1] (0 for the first).
+            for (int i = 0, begin = 0; i < nodeCount; begin = start[i++])
+                if (start[i] - begin > 1) Array.Sort(keys, byKey, begin, start[i] - begin);
+            return (keys, byKey);
+        }
+
         public OpenGraph Build()
         {
             // Declared names in ordinal order; rank maps a name id to its node index.
@@ -306,25 +345,17 @@ public static class OgraphReader
             for (int i = 0; i < sortedIds.Length; i++) rank[sortedIds[i]] = i;
 
             // Edges sorted by (U, V) of node indices; equal neighbours in that order are a repeated edge.
-            var keys = new long[edgeU.Count];
-            var byKey = new int[keys.Length];
-            for (int e = 0; e < keys.Length; e++)
-            {
-                int a = rank[edgeU[e]], b = rank[edgeV[e]];
-                keys[e] = a < b ? ((long)a << 32) | (uint)b : ((long)b << 32) | (uint)a;
-                byKey[e] = e;
-            }
-            Array.Sort(keys, byKey);
+            var (keys, byKey) = SortedEdgeKeys(rank, sortedIds.Length);
             RefuseRepeatedEdges(keys, byKey);
 
             foreach (var (id, line, column, keyword) in references)
                 if (!declared[id])
-                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{keyword}': declare it with an 'edge' or 'node' line");
+                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{Keywords[keyword]}': declare it with an 'edge' or 'node' line");
             foreach (var (id, (_, line, column)) in labels)
                 if (outputs.TryGetValue(id, out var outputLine))
                     throw new GraphFormatException(fileName, line, column, $"node {names[id]} is an output (line {outputLine}): outputs are never measured and carry no label");
             var sortedWeights = new Rational[keys.Length];
-            for (int k = 0; k < keys.Length; k++) sortedWeights[k] = weights[byKey[k]];
+            for (int k = 0; k < keys.Length; k++) sortedWeights[k] = weightTable[weightIds[byKey[k]]];
             var inputIndices = new List<int>(inputs.Count);
             foreach (var id in inputs.Keys) inputIndices.Add(rank[id]);
             var outputIndices = new List<int>(outputs.Count);
