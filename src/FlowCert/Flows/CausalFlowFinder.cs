@@ -21,7 +21,8 @@ internal static class CausalFlowFinder
         foreach (var u in state.Active)
         {
             if (state.UnprocessedNeighbours[u] != 1) continue;
-            int v = Array.Find(g.Neighbours[u], w => !state.Processed[w]);
+            int v = -1;
+            foreach (var w in g.Neighbours[u]) if (!state.Processed[w]) { v = w; break; }
             if (!chosen.TryGetValue(v, out var other) || u < other) chosen[v] = u; // the smallest such corrector
         }
         if (chosen.Count == 0) return LayerOutcome.Stuck(new BlockedSet(state.Unprocessed(), []));

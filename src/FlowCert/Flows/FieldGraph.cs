@@ -19,9 +19,9 @@ internal sealed class FieldGraph<T, TField> where T : struct where TField : stru
     /// <summary>Which field <see cref="Field"/> is.</summary>
     public FieldSpec Spec { get; }
     /// <summary>Sorted neighbour indices of each node, over edges whose weight is non-zero in the field.</summary>
-    public int[][] Neighbours { get; }
+    public CompactRows<int> Neighbours { get; }
     /// <summary>The non-zero field weights aligned with <see cref="Neighbours"/>.</summary>
-    public T[][] Weights { get; }
+    public CompactRows<T> Weights { get; }
     /// <summary>Edges whose weight is zero in the field, in the graph's edge order.</summary>
     public IReadOnlyList<WeightedEdge> Vanished { get; }
 
@@ -30,7 +30,7 @@ internal sealed class FieldGraph<T, TField> where T : struct where TField : stru
     {
         Graph = graph; Field = field; Spec = spec;
         int n = graph.NodeCount;
-        // Two passes over the edges into exact-size arrays (no per-node lists): count, then fill.
+        // Two passes over the edges into two flat arrays (no per-node arrays): count, then fill.
         var degree = new int[n];
         var mapped = new T[graph.Edges.Count];
         var kept = new bool[graph.Edges.Count];
@@ -52,28 +52,41 @@ internal sealed class FieldGraph<T, TField> where T : struct where TField : stru
             degree[e.U]++;
             degree[e.V]++;
         }
-        Neighbours = new int[n][];
-        Weights = new T[n][];
-        for (int i = 0; i < n; i++) { Neighbours[i] = new int[degree[i]]; Weights[i] = new T[degree[i]]; }
-        var fill = new int[n];
+        var start = new int[n + 1];
+        for (int i = 0; i < n; i++) start[i + 1] = start[i] + degree[i];
+        var targets = new int[start[n]];
+        var weights = new T[start[n]];
+        var fill = start[..n];
         for (int k = 0; k < graph.Edges.Count; k++)
         {
             if (!kept[k]) continue;
             var (u, v) = (graph.Edges[k].U, graph.Edges[k].V);
-            (Neighbours[u][fill[u]], Weights[u][fill[u]++]) = (v, mapped[k]);
-            (Neighbours[v][fill[v]], Weights[v][fill[v]++]) = (u, mapped[k]);
+            (targets[fill[u]], weights[fill[u]++]) = (v, mapped[k]);
+            (targets[fill[v]], weights[fill[v]++]) = (u, mapped[k]);
         }
         // Edges come sorted by (U, V), which already sorts every list; sort anyway if a list is not.
         for (int i = 0; i < n; i++)
-            for (int j = 1; j < degree[i]; j++)
-                if (Neighbours[i][j - 1] > Neighbours[i][j]) { Array.Sort(Neighbours[i], Weights[i]); break; }
+            for (int j = start[i] + 1; j < start[i + 1]; j++)
+                if (targets[j - 1] > targets[j]) { Array.Sort(targets, weights, start[i], degree[i]); break; }
+        Neighbours = new CompactRows<int>(start, targets);
+        Weights = new CompactRows<T>(start, weights);
         Vanished = vanished;
     }
 
     /// <summary>A[u][v] in the field (zero when not adjacent).</summary>
     public T Weight(int u, int v)
     {
-        int k = Array.BinarySearch(Neighbours[u], v);
+        int k = Neighbours[u].BinarySearch(v);
         return k >= 0 ? Weights[u][k] : Field.Zero;
     }
+}
+
+/// <summary>Rows of different lengths stored end to end in one array: row i is items[start[i] .. start[i + 1]).</summary>
+internal sealed class CompactRows<TItem>(int[] start, TItem[] items)
+{
+    /// <summary>The number of rows.</summary>
+    public int Count => start.Length - 1;
+
+    /// <summary>Row i.</summary>
+    public ReadOnlySpan<TItem> this[int i] => items.AsSpan(start[i], start[i + 1] - start[i]);
 }

@@ -8,7 +8,7 @@ namespace FlowCert.Flows;
 /// </summary>
 internal sealed class LayerState
 {
-    private readonly int[][] neighbours;
+    private readonly CompactRows<int> neighbours;
     private readonly bool[] isInput;
     public bool[] Processed { get; }
     public bool[] IsCorrector { get; }
@@ -24,10 +24,10 @@ internal sealed class LayerState
     public int UnprocessedCount { get; private set; }
     public List<int[]> Layers { get; } = [];
 
-    public LayerState(int[][] neighbours, IReadOnlySet<int> inputs, IReadOnlySet<int> outputs)
+    public LayerState(CompactRows<int> neighbours, IReadOnlySet<int> inputs, IReadOnlySet<int> outputs)
     {
         this.neighbours = neighbours;
-        int n = neighbours.Length;
+        int n = neighbours.Count;
         isInput = new bool[n];
         foreach (var i in inputs) isInput[i] = true;
         Processed = new bool[n];
