@@ -104,9 +104,11 @@ public static class OgraphReader
         // Tokens of the current line: start (in the line) and length.
         private int[] starts = new int[8], lengths = new int[8];
         private int count, lineNo;
-        private ReadOnlyMemory<char> line;
+        // The current line: lineLength characters of lineArray from lineStart.
+        private char[] lineArray = [];
+        private int lineStart, lineLength;
 
-        private ReadOnlySpan<char> Tok(int k) => line.Span.Slice(starts[k], lengths[k]);
+        private ReadOnlySpan<char> Tok(int k) => new(lineArray, lineStart + starts[k], lengths[k]);
         private string TokText(int k) => Tok(k).ToString();
         private GraphFormatException Error(int k, string problem) => new(fileName, lineNo, starts[k] + 1, problem);
 
@@ -133,7 +135,7 @@ public static class OgraphReader
                 {
                     chunkLen = reader.Read(chunk, 0, chunk.Length);
                     chunkPos = 0;
-                    if (chunkLen == 0) { line = lineBuffer.AsMemory(0, length); return false; }
+                    if (chunkLen == 0) { (lineArray, lineStart, lineLength) = (lineBuffer, 0, length); return false; }
                 }
                 int nl = Array.IndexOf(chunk, '\n', chunkPos, chunkLen - chunkPos);
                 int end = nl < 0 ? chunkLen : nl;
@@ -141,7 +143,7 @@ public static class OgraphReader
                 if (nl >= 0 && length == 0 && take <= MaxLineLength)
                 {
                     // The whole line is in this chunk, which stays unchanged until the next call: no copy.
-                    line = chunk.AsMemory(chunkPos, take);
+                    (lineArray, lineStart, lineLength) = (chunk, chunkPos, take);
                     chunkPos = nl + 1;
                     return true;
                 }
@@ -151,13 +153,13 @@ public static class OgraphReader
                 Array.Copy(chunk, chunkPos, lineBuffer, length, take);
                 length += take;
                 chunkPos = end;
-                if (nl >= 0) { chunkPos++; line = lineBuffer.AsMemory(0, length); return true; }
+                if (nl >= 0) { chunkPos++; (lineArray, lineStart, lineLength) = (lineBuffer, 0, length); return true; }
             }
         }
 
         private void Tokenize()
         {
-            var s = line.Span;
+            var s = new ReadOnlySpan<char>(lineArray, lineStart, lineLength);
             count = 0;
             int i = 0;
             while (i < s.Length)
@@ -193,26 +195,26 @@ public static class OgraphReader
             return id;
         }
 
-        private bool Is(int k, string keyword) => Tok(k).SequenceEqual(keyword);
-
         private void Line()
         {
-            if (Is(0, "input")) Terminals(inputs, "input");
-            else if (Is(0, "output")) Terminals(outputs, "output");
-            else if (Is(0, "node"))
+            switch (Tok(0))
             {
-                if (count < 2) throw Error(0, "'node' needs at least one node name");
-                for (int k = 1; k < count; k++)
-                {
-                    int id = Name(k); // before indexing: Name may grow the declared array
-                    declared[id] = true;
-                }
+                case "edge": Edge(); break;
+                case "at": At(); break;
+                case "input": Terminals(inputs, "input"); break;
+                case "output": Terminals(outputs, "output"); break;
+                case "node":
+                    if (count < 2) throw Error(0, "'node' needs at least one node name");
+                    for (int k = 1; k < count; k++)
+                    {
+                        int id = Name(k); // before indexing: Name may grow the declared array
+                        declared[id] = true;
+                    }
+                    break;
+                case "measure": Measure(); break;
+                case "plane": throw Error(0, "'plane' is reserved for a later version of the format");
+                default: throw Error(0, $"unknown keyword '{Formats.Excerpt.Of(TokText(0))}': expected input, output, node, edge, at or measure");
             }
-            else if (Is(0, "edge")) Edge();
-            else if (Is(0, "at")) At();
-            else if (Is(0, "measure")) Measure();
-            else if (Is(0, "plane")) throw Error(0, "'plane' is reserved for a later version of the format");
-            else throw Error(0, $"unknown keyword '{Formats.Excerpt.Of(TokText(0))}': expected input, output, node, edge, at or measure");
         }
 
         private void Terminals(Dictionary<int, int> target, string keyword)
