@@ -77,9 +77,8 @@ public static class OgraphReader
         // Where each edge's first name is (line, column), for the repeated-edge error found in Build.
         private readonly List<int> edgeLines = new(), edgeColumns = new();
         private readonly Dictionary<int, int> inputs = new(), outputs = new();
-        // Names used before their declaration may come: checked in Build. Keyword is an index into Keywords.
-        private readonly List<(int Id, int Line, int Column, int Keyword)> references = new();
-        private static readonly string[] Keywords = ["input", "output", "at", "measure"];
+        // Names used before their declaration may come: checked in Build.
+        private readonly List<(int Id, int Line, int Column, string Keyword)> references = new();
         // Every 'at' line in file order (a later line for the same node wins).
         private readonly List<(int Id, PositionHint Hint)> positions = new();
         private readonly Dictionary<int, (MeasurementLabel Label, int Line, int Column)> labels = new();
@@ -225,7 +224,7 @@ public static class OgraphReader
                 if (target.TryGetValue(n, out var first))
                     throw Error(k, $"node {names[n]} is listed twice as {keyword} (lines {first} and {lineNo})");
                 target[n] = lineNo;
-                references.Add((n, lineNo, starts[k] + 1, Array.IndexOf(Keywords, keyword)));
+                references.Add((n, lineNo, starts[k] + 1, keyword));
             }
         }
 
@@ -268,7 +267,7 @@ public static class OgraphReader
                 if (!TryParseCoordinate(t, out coords[k]))
                     throw Error(2 + k, $"bad coordinate '{Formats.Excerpt.Of(t.ToString())}': write a decimal such as 2 or -1.5, at most 9 digits on each side of the point");
             }
-            references.Add((n, lineNo, starts[1] + 1, 2));
+            references.Add((n, lineNo, starts[1] + 1, "at"));
             positions.Add((n, new PositionHint(coords[0], coords[1])));
         }
 
@@ -281,7 +280,7 @@ public static class OgraphReader
             if (labels.TryGetValue(n, out var first))
                 throw Error(1, $"node {names[n]} has two labels (lines {first.Line} and {lineNo})");
             labels[n] = (label, lineNo, starts[1] + 1);
-            references.Add((n, lineNo, starts[1] + 1, 3));
+            references.Add((n, lineNo, starts[1] + 1, "measure"));
         }
 
         /// <summary>
@@ -352,7 +351,7 @@ public static class OgraphReader
 
             foreach (var (id, line, column, keyword) in references)
                 if (!declared[id])
-                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{Keywords[keyword]}': declare it with an 'edge' or 'node' line");
+                    throw new GraphFormatException(fileName, line, column, $"unknown node {names[id]} in '{keyword}': declare it with an 'edge' or 'node' line");
             foreach (var (id, (_, line, column)) in labels)
                 if (outputs.TryGetValue(id, out var outputLine))
                     throw new GraphFormatException(fileName, line, column, $"node {names[id]} is an output (line {outputLine}): outputs are never measured and carry no label");
