@@ -124,7 +124,7 @@ public static class OgraphReader
             }
         }
 
-        /// <summary>Reads up to the next LF (not included) into <see cref="line"/>; false when the text ended.</summary>
+        /// <summary>Reads up to the next LF (not included) as the current line (<see cref="lineArray"/> from <see cref="lineStart"/>, <see cref="lineLength"/> characters); false when the text ended.</summary>
         private bool NextLine()
         {
             int length = 0;
@@ -322,9 +322,9 @@ public static class OgraphReader
             var byKey = new int[m];
             for (int e = 0; e < m; e++)
             {
-                int a = rank[edgeU[e]], b = rank[edgeV[e]];
-                int pos = start[Math.Min(a, b)]++;
-                keys[pos] = ((long)Math.Min(a, b) << 32) | (uint)Math.Max(a, b);
+                int a = rank[edgeU[e]], b = rank[edgeV[e]], low = Math.Min(a, b);
+                int pos = start[low]++;
+                keys[pos] = ((long)low << 32) | (uint)Math.Max(a, b);
                 byKey[pos] = e;
             }
             // start[i] is now the end of run i, which begins at start[i - 1] (0 for the first).

@@ -1,4 +1,3 @@
-using System.Numerics;
 using FlowCert.Graphs;
 using Fractions;
 
