@@ -40,7 +40,9 @@ public static class EmbeddedGraph
             var e = json.Strings("graph.edges", i);
             if (e.Count != 3) throw new InvalidCertificate($"graph.edges[{i}] must be [u, v, weight], found {e.Count} items");
             var (u, v) = (Json.Cut(e[0]), Json.Cut(e[1]));
-            if (!index.TryGetValue(e[0], out var a) || !index.TryGetValue(e[1], out var b))
+            // sorted edges: u is usually the u of the edge before (no lookup)
+            var a = i > 0 && g.Names[g.Edges[^1].U] == e[0] ? g.Edges[^1].U : index.GetValueOrDefault(e[0], -1);
+            if (a < 0 || !index.TryGetValue(e[1], out var b))
                 throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} names a node not in graph.nodes");
             if (a >= b) throw new InvalidCertificate($"graph.edges[{i}]: {u} {v} must have u < v");
             if (!weights.TryGetValue(e[2], out var w))

@@ -13,7 +13,7 @@ public sealed class Json : IDisposable
     static readonly UTF8Encoding Utf8 = new(false, true);
     static readonly string[] Nested = ["graph", "producer", "obstruction"];
     static readonly SearchValues<byte> Special = SearchValues.Create([(byte)'"', (byte)'\\', .. Enumerable.Range(0, 32).Select(b => (byte)b)]);
-    readonly List<HashSet<string>> keySets = [];
+    readonly List<(HashSet<string> Set, List<string> Sorted)> keySets = []; // the keys of the open objects, one per depth
     readonly Stream stream;
     readonly string path;
     readonly Progress progress;
@@ -45,11 +45,14 @@ public sealed class Json : IDisposable
         switch (Kind())
         {
             case "object":
-                while (keySets.Count <= depth) keySets.Add(new(StringComparer.Ordinal));
-                var keys = keySets[depth]; keys.Clear();
+                while (keySets.Count <= depth) keySets.Add((new(StringComparer.Ordinal), []));
+                var (keys, sorted) = keySets[depth]; keys.Clear(); sorted.Clear();
                 foreach (var key in Object())
                 {
-                    if (!keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
+                    // keys in increasing order cannot repeat: a set of the keys is built only once one is out of order
+                    var ordered = keys.Count == 0 && (sorted.Count == 0 || string.CompareOrdinal(sorted[^1], key) < 0);
+                    if (ordered) sorted.Add(key); else if (keys.Count == 0) keys.UnionWith(sorted);
+                    if (!ordered && !keys.Add(key)) throw Syntax($"duplicate key \"{Cut(key)}\"");
                     if (container is not null) members[(container, key)] = (Position, line, column);
                     Skip(depth + 1, depth == 0 && Nested.Contains(key) ? key : null);
                 }
@@ -66,9 +69,10 @@ public sealed class Json : IDisposable
 
     bool Seek((long Offset, int Line, int Column) at) { (stream.Position, length, pos, line, column) = (at.Offset, 0, 0, at.Line, at.Column); return true; }
 
-    int Peek()
+    int Peek() => pos < length ? buffer[pos] : Refill(); // small enough to be inlined
+
+    int Refill()
     {
-        if (pos < length) return buffer[pos];
         (length, pos) = (stream.Read(buffer), 0);
         if (progress.Due) progress.Show($"reading: byte {stream.Position:N0} of {stream.Length:N0}");
         return length > 0 ? buffer[0] : -1;
@@ -221,18 +225,19 @@ public sealed class Json : IDisposable
 
     /// <summary>Requires the next value's kind; the message names <paramref name="what"/> with ".key" or "[index]" if given
     /// (composed only for the message: most values are read without one).</summary>
-    void Expecting(string kind, string what, string expected, string? key = null, int index = -1)
+    void Expecting(string kind, string what, string expected, string? key = null, int index = -1, int outer = -1)
     {
         var found = Kind();
         if (found == kind) return;
         if (key is not null) what = $"{what}.{Cut(key)}";
+        if (outer >= 0) what = $"{what}[{outer}]";
         if (index >= 0) what = $"{what}[{index}]";
         if (found == "number") found = Number().Integer ? "integer" : "float";
         if (found is "true" or "false") found = "boolean";
         throw new InvalidCertificate($"{what} must be {expected}, found {found}");
     }
 
-    public string String(string what, string? key = null, int index = -1) { Expecting("string", what, "a string", key, index); return ReadString()!; }
+    public string String(string what, string? key = null, int index = -1, int outer = -1) { Expecting("string", what, "a string", key, index, outer); return ReadString()!; }
 
     public BigInteger Integer(string what) { Expecting("number", what, "an integer");
         return Number() is (var text, true) ? BigInteger.Parse(text) : throw new InvalidCertificate($"{what} must be an integer, found float"); }
@@ -243,9 +248,9 @@ public sealed class Json : IDisposable
     /// <summary>An array of strings; <paramref name="index"/>, when given, says the array is item [index] of <paramref name="what"/>.</summary>
     public List<string> Strings(string what, int index = -1)
     {
-        var items = Items(what, index);
-        what = index < 0 ? what : $"{what}[{index}]";
-        return items.Select(i => String(what, null, i)).ToList();
+        var items = new List<string>();
+        foreach (var i in Items(what, index)) items.Add(String(what, null, i, index));
+        return items;
     }
 
     /// <summary>The keys of an object (the caller reads each value), and a boolean.</summary>

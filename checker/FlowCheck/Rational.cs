@@ -15,7 +15,8 @@ public readonly record struct Rational
     {
         // Stryker disable once Equality: a denominator is never 0 here (the readers refuse one, and only non-zero elements are inverted)
         if (den.Sign < 0) { num = -num; den = -den; }
-        var gcd = BigInteger.GreatestCommonDivisor(num, den);
+        // Stryker disable once Conditional: an integer (a residue, say) needs no common divisor; the gcd would be 1 too
+        var gcd = den.IsOne ? den : BigInteger.GreatestCommonDivisor(num, den);
         (Num, Den) = (num / gcd, den / gcd);
     }
 
