@@ -40,6 +40,9 @@ public class JsonReaderTests
     [InlineData("{\"a\": 1}\0", ":1:9: not JSON: content after the JSON value")]
     [InlineData("\0{}", ":1:1: not JSON: NUL byte")]
     [InlineData("{\"a\": {\"b\": 1, \"b\": 2}}", "not JSON: duplicate key \"b\"")]
+    [InlineData("{\"a\": 1, \"c\": 2, \"b\": 3, \"a\": 4}", ":1:30: not JSON: duplicate key \"a\"")] // found among the sorted keys before the first out of order
+    [InlineData("{\"c\": 1, \"a\": 2, \"b\": 3, \"b\": 4}", ":1:30: not JSON: duplicate key \"b\"")] // found among the keys after it
+    [InlineData("{\"a\": 1, \"b\": 2, \"b\": 3}", ":1:22: not JSON: duplicate key \"b\"")] // the key just before
     [InlineData("{\n  \"a\": [\n    1,\n    ]\n}", ":4:5: not JSON: unexpected character ']'")]
     [InlineData("{\"a\": \"unfinished", "not JSON: unexpected end of the text")]
     [InlineData("\u00a0{}", ":1:1: not JSON: unexpected byte")]
@@ -50,6 +53,17 @@ public class JsonReaderTests
         Assert.Equal("", r.Out);
         Assert.StartsWith("unreadable: ", r.Err);
         Assert.Contains(message, r.Err);
+    }
+
+    [Theory]
+    [InlineData("{\"c\": 1, \"a\": 2, \"b\": 3, \"d\": 4}")]
+    [InlineData("{\"b\": 1, \"a\": 2, \"d\": 3, \"c\": 4}")]
+    [InlineData("{\"e\": {\"x\": 1, \"y\": 2}, \"d\": {\"y\": 1, \"x\": 2}}")]
+    public void KeysOutOfOrderAreNotDuplicates(string text)
+    {
+        var r = CheckText(text); // valid JSON, so the verdict is about the content: unknown keys
+        Assert.Equal(1, r.Code);
+        Assert.StartsWith("invalid: unknown key", r.Out);
     }
 
     [Fact]
