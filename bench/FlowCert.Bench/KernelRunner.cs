@@ -172,9 +172,9 @@ public static class KernelRunner
     }
 
     /// <summary>Times FlowSolver.Solve (generalized flow) on a band graph: prints "median-seconds depth".</summary>
-    public static void TimeBand(int n, int bandwidth, string fieldName, int reps, bool hub = false)
+    public static void TimeBand(int n, int bandwidth, string fieldName, int reps, bool hub = false, int hubs = 0)
     {
-        var graph = Workloads.Band(n, bandwidth, hub);
+        var graph = Workloads.Band(n, bandwidth, hub, hubs);
         var field = FieldSpec.Parse(fieldName);
         var times = new List<double>();
         int depth = 0;

@@ -16,9 +16,10 @@ public static class Program
         else if (args is ["kernel", var field, var file, var reps]) KernelRunner.Time(field, file, int.Parse(reps, System.Globalization.CultureInfo.InvariantCulture));
         else if (args is ["bandfile", var fn, var fwidth, var outFile])
             File.WriteAllText(outFile, FlowCert.Graphs.CanonicalForm.Write(Workloads.Band(int.Parse(fn, System.Globalization.CultureInfo.InvariantCulture), int.Parse(fwidth, System.Globalization.CultureInfo.InvariantCulture))));
-        else if (args is ["band", var n, var width, var bandField, var bandReps, .. var rest] && rest is [] or ["hub"])
+        else if (args is ["band", var n, var width, var bandField, var bandReps, .. var rest] && rest is [] or ["hub"] or ["hubs", _])
             KernelRunner.TimeBand(int.Parse(n, System.Globalization.CultureInfo.InvariantCulture), int.Parse(width, System.Globalization.CultureInfo.InvariantCulture),
-                bandField, int.Parse(bandReps, System.Globalization.CultureInfo.InvariantCulture), hub: rest is ["hub"]);
+                bandField, int.Parse(bandReps, System.Globalization.CultureInfo.InvariantCulture), hub: rest is ["hub"],
+                hubs: rest is ["hubs", var k] ? int.Parse(k, System.Globalization.CultureInfo.InvariantCulture) : 0);
         else BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
     }
 }

@@ -28,7 +28,12 @@ public static class Workloads
     /// The hub never corrects anything (the band's corrections stay valid), but it keeps every unprocessed
     /// node on the frontier of every layer: the family where each layer's block spans all unprocessed rows.
     /// </summary>
-    public static OpenGraph Band(int n, int bandwidth, bool hub = false)
+    /// <summary>
+    /// The band graph; with <paramref name="hub"/> one more output joined to every node; with
+    /// <paramref name="hubs"/> that many more outputs, each joined to every node with probability 1/2 (they
+    /// stay active correctors in every layer, so each layer's block is about n by hubs).
+    /// </summary>
+    public static OpenGraph Band(int n, int bandwidth, bool hub = false, int hubs = 0)
     {
         var names = Enumerable.Range(0, n).Select(i => "v" + i.ToString("D5", System.Globalization.CultureInfo.InvariantCulture)).ToArray();
         var rng = new Random(11);
@@ -36,7 +41,9 @@ public static class Workloads
         for (int i = 0; i < n; i++)
             for (int j = i + 1; j <= Math.Min(n - 1, i + bandwidth); j++)
                 if (j == i + bandwidth || rng.Next(2) == 1) edges.Add((names[i], names[j], Rational.One));
-        if (!hub) return new OpenGraph(names, edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth));
+        var extra = Enumerable.Range(0, hubs).Select(h => "h" + h.ToString("D5", System.Globalization.CultureInfo.InvariantCulture)).ToArray();
+        foreach (var h in extra) edges.AddRange(names.Where(_ => rng.Next(2) == 1).Select(v => (h, v, Rational.One)));
+        if (!hub) return new OpenGraph(names.Concat(extra), edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth).Concat(extra));
         edges.AddRange(names.Select(v => ("hub", v, Rational.One)));
         return new OpenGraph(names.Append("hub"), edges, names.Take(bandwidth / 2), names.TakeLast(bandwidth).Append("hub"));
     }
