@@ -33,18 +33,19 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
     private readonly List<Row> rows = [];
     private readonly Dictionary<int, int> rowSlot = [];
     private readonly Dictionary<int, int> columnSlot = [];
-    private readonly int[] rowIdAt;
     private readonly int rowCapacity, columnCapacity;
+    // Slots 0..used-1 have been handed out; a deleted row's or removed column's slot is zero everywhere
+    // and is handed out again first, so the row passes run over the largest number present at once.
     private int rowsUsed, columnsUsed;
+    private readonly Stack<int> freeRows = new(), freeColumns = new();
 
-    /// <summary>An empty form for at most <paramref name="rowCapacity"/> row ids and <paramref name="columnCapacity"/> column ids over its life.</summary>
+    /// <summary>An empty form for at most <paramref name="rowCapacity"/> rows and <paramref name="columnCapacity"/> columns at once.</summary>
     public CarriedEchelon(TField field, int rowCapacity, int columnCapacity)
     {
         if (!field.IsZero(default)) throw new ArgumentException("dense rows start as default(T), which must be the field's zero");
         f = field;
         this.rowCapacity = rowCapacity;
         this.columnCapacity = columnCapacity;
-        rowIdAt = new int[rowCapacity];
     }
 
     /// <summary>The number of rows of B.</summary>
@@ -53,13 +54,15 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
     /// <summary>Whether row <paramref name="id"/> is a row of B now.</summary>
     public bool HasRow(int id) => rowSlot.ContainsKey(id);
 
+    /// <summary>Whether column <paramref name="id"/> is a column of B now.</summary>
+    public bool HasColumn(int id) => columnSlot.ContainsKey(id);
+
     /// <summary>Adds a row of B that is zero on every column so far (it enters as a row of the left kernel).</summary>
     public void AddZeroRow(int id)
     {
-        if (rowsUsed == rowCapacity) throw new InvalidOperationException("more row ids than the capacity given");
-        int s = rowsUsed++;
+        int s = freeRows.Count > 0 ? freeRows.Pop() : rowsUsed < rowCapacity ? rowsUsed++
+            : throw new InvalidOperationException("more rows at once than the capacity given");
         rowSlot.Add(id, s);
-        rowIdAt[s] = id;
         var x = new T[rowCapacity];
         x[s] = f.One;
         rows.Add(new Row(new T[columnCapacity], x));
@@ -82,13 +85,23 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
         foreach (var row in rows)
             if (row != k && !f.IsZero(row.X[s])) SubtractMultiple(row, f.Multiply(row.X[s], inverse), k);
         rows.Remove(k);
+        freeRows.Push(s);
+    }
+
+    /// <summary>Removes column <paramref name="id"/>, which must be zero on every row of B now (its reduced form is then zero too).</summary>
+    public void RemoveZeroColumn(int id)
+    {
+        int c = columnSlot[id];
+        if (rows.Any(r => !f.IsZero(r.R[c]))) throw new InvalidOperationException($"column {id} is not zero");
+        columnSlot.Remove(id);
+        freeColumns.Push(c);
     }
 
     /// <summary>Inserts column <paramref name="id"/> of B, given its non-zero entries by row id (every row id present).</summary>
     public void AddColumn(int id, ReadOnlySpan<int> rowIds, ReadOnlySpan<T> values)
     {
-        if (columnsUsed == columnCapacity) throw new InvalidOperationException("more column ids than the capacity given");
-        int c = columnsUsed++;
+        int c = freeColumns.Count > 0 ? freeColumns.Pop() : columnsUsed < columnCapacity ? columnsUsed++
+            : throw new InvalidOperationException("more columns at once than the capacity given");
         columnSlot.Add(id, c);
         var slots = new int[rowIds.Length];
         for (int e = 0; e < rowIds.Length; e++) slots[e] = rowSlot[rowIds[e]];

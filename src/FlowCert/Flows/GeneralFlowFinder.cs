@@ -13,7 +13,7 @@ internal readonly record struct CarryRule(int Ratio, int MinRank, long MaxEntrie
 {
     /// <summary>The rule of the command line: a fresh elimination costs about min(m, c) row passes at a few
     /// entries per instruction, a carried layer about twice the layer's size in passes at one entry each.</summary>
-    public static readonly CarryRule Default = new(16, 64, 1L << 24);
+    public static readonly CarryRule Default = new(4, 64, 1L << 24);
     /// <summary>Carry from the second layer on (the first has no layer before it), whatever the sizes (tests: both ways must agree byte for byte).</summary>
     public static readonly CarryRule Always = new(0, 0, long.MaxValue);
     /// <summary>Never carry.</summary>
@@ -79,6 +79,9 @@ internal static class GeneralFlowFinder
     {
         var layer = state.Layers[^1];
         foreach (var v in layer) form.DeleteRow(v);
+        foreach (var v in layer)
+            foreach (var w in g.Neighbours[v])
+                if (state.UnprocessedNeighbours[w] == 0 && form.HasColumn(w)) form.RemoveZeroColumn(w); // a corrector gone inactive
         foreach (var v in layer)
             if (state.IsCorrector[v])
                 foreach (var u in g.Neighbours[v])

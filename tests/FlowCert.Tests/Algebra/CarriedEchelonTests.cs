@@ -5,7 +5,7 @@ namespace FlowCert.Tests.Algebra;
 /// <summary>
 /// The carried reduced form (<see cref="CarriedEchelon{T, TField}"/>) against a fresh elimination after
 /// every operation of a seeded random sequence: zero rows added, any row deleted (rows in the column space
-/// and rows that are not), columns inserted with ids below, between and above the pivots so far. After each
+/// and rows that are not; their slots are used again), zero columns removed, columns inserted with ids below, between and above the pivots so far. After each
 /// operation the answers must be those of the sparse elimination of the same matrix: the rank, which rows
 /// are solvable, each canonical solution entry for entry, and the reduced echelon form of the left kernel
 /// (unique, common practice); the reference rank of the plain Gauss-Jordan matrix must agree too.
@@ -16,19 +16,21 @@ public class CarriedEchelonTests
         where TField : struct, IField<ulong>
     {
         var rng = new Random(seed);
-        int checks = 0, solvedRows = 0, kernelRows = 0, moved = 0;
+        int checks = 0, solvedRows = 0, kernelRows = 0, moved = 0, removed = 0;
         for (int t = 0; t < sequences; t++)
         {
             int rowCap = rng.Next(2, 24), colCap = rng.Next(2, 30);
             var form = new CarriedEchelon<ulong, TField>(f, rowCap, colCap);
             var matrix = new SortedDictionary<int, SortedDictionary<int, ulong>>(); // row id -> column id -> entry
-            var freeColumnIds = Enumerable.Range(0, 3 * colCap).OrderBy(_ => rng.Next()).Take(colCap).ToList();
+            var freeColumnIds = Enumerable.Range(0, 6 * colCap).OrderBy(_ => rng.Next()).Take(2 * colCap).ToList();
+            var present = new List<int>();
             int nextRow = 0, columns = 0;
             double density = 0.2 + 0.6 * rng.NextDouble();
-            for (int step = 0; step < rowCap + colCap; step++)
+            for (int step = 0; step < 2 * (rowCap + colCap); step++)
             {
-                int op = rng.Next(3);
-                if (op == 0 && nextRow < rowCap)
+                int op = rng.Next(4);
+                var zeroColumns = present.Where(c => matrix.Values.All(row => !row.ContainsKey(c))).ToList();
+                if (op == 0 && matrix.Count < rowCap)
                 {
                     int id = 5 * nextRow++ + 2;
                     form.AddZeroRow(id);
@@ -40,7 +42,14 @@ public class CarriedEchelonTests
                     form.DeleteRow(id);
                     matrix.Remove(id);
                 }
-                else if (columns < colCap && matrix.Count > 0)
+                else if (op == 3 && zeroColumns.Count > 0)
+                {
+                    int id = zeroColumns[rng.Next(zeroColumns.Count)];
+                    form.RemoveZeroColumn(id); // its slot is handed out again
+                    present.Remove(id);
+                    removed++;
+                }
+                else if (present.Count < colCap && columns < freeColumnIds.Count && matrix.Count > 0)
                 {
                     int id = freeColumnIds[columns++];
                     var entries = matrix.Keys.Where(_ => rng.NextDouble() < density).Select(r => (r, nonZero(rng))).ToArray();
@@ -48,6 +57,7 @@ public class CarriedEchelonTests
                     int pivotsAbove = form.Result(matrix.Keys.ToArray()).SolveUnitVectors().Values.SelectMany(s => s.Indices).Count(c => c > id);
                     if (pivotsAbove > 0) moved++;
                     foreach (var (r, v) in entries) matrix[r][id] = v;
+                    present.Add(id);
                     form.AddColumn(id, entries.Select(e => e.r).ToArray(), entries.Select(e => e.Item2).ToArray());
                 }
                 else continue;
@@ -55,8 +65,8 @@ public class CarriedEchelonTests
                 checks++;
             }
         }
-        Assert.True(checks > 10 * sequences && solvedRows > checks / 2 && kernelRows > checks / 2 && moved > sequences / 2,
-            $"checks {checks}, solved rows {solvedRows}, kernel vectors {kernelRows}, columns inserted below a pivot {moved}");
+        Assert.True(checks > 10 * sequences && solvedRows > checks / 2 && kernelRows > checks / 2 && moved > sequences / 2 && removed > sequences / 2,
+            $"checks {checks}, solved rows {solvedRows}, kernel vectors {kernelRows}, columns inserted below a pivot {moved}, zero columns removed {removed}");
     }
 
     private static void Check<TField>(TField f, CarriedEchelon<ulong, TField> form, SortedDictionary<int, SortedDictionary<int, ulong>> matrix,
