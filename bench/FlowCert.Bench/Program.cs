@@ -7,7 +7,7 @@ namespace FlowCert.Bench;
 /// Two plain stopwatch modes serve <c>bench/compare</c>: <c>matrices DIR</c> writes the kernel matrices,
 /// <c>kernel FIELD FILE REPS</c> times the elimination kernel on one of them, <c>band N WIDTH FIELD REPS [hub | hubs K] [fresh]</c>
 /// times a whole solve on a random band graph, with a hub output joined to every node or K hub outputs joined to random halves if asked,
-/// and with every layer's block eliminated afresh (never carried) if asked (bench/layers), <c>bandfile N WIDTH OUT</c> writes that graph.
+/// and with every layer's block eliminated afresh (never carried) if asked (bench/layers), <c>bandfile N WIDTH OUT [hubs K]</c> writes that graph.
 /// </summary>
 public static class Program
 {
@@ -15,8 +15,9 @@ public static class Program
     {
         if (args is ["matrices", var dir]) KernelRunner.WriteMatrices(dir);
         else if (args is ["kernel", var field, var file, var reps]) KernelRunner.Time(field, file, int.Parse(reps, System.Globalization.CultureInfo.InvariantCulture));
-        else if (args is ["bandfile", var fn, var fwidth, var outFile])
-            File.WriteAllText(outFile, FlowCert.Graphs.CanonicalForm.Write(Workloads.Band(int.Parse(fn, System.Globalization.CultureInfo.InvariantCulture), int.Parse(fwidth, System.Globalization.CultureInfo.InvariantCulture))));
+        else if (args is ["bandfile", var fn, var fwidth, var outFile, .. var more] && more is [] or ["hubs", _])
+            File.WriteAllText(outFile, FlowCert.Graphs.CanonicalForm.Write(Workloads.Band(int.Parse(fn, System.Globalization.CultureInfo.InvariantCulture), int.Parse(fwidth, System.Globalization.CultureInfo.InvariantCulture),
+                hubs: more is ["hubs", var fk] ? int.Parse(fk, System.Globalization.CultureInfo.InvariantCulture) : 0)));
         else if (args is ["band", var n, var width, var bandField, var bandReps, .. var rest]
                  && (rest is [.. var shape, "fresh"] ? shape : rest) is [] or ["hub"] or ["hubs", _] && rest.Count(a => a == "fresh") <= 1)
             KernelRunner.TimeBand(int.Parse(n, System.Globalization.CultureInfo.InvariantCulture), int.Parse(width, System.Globalization.CultureInfo.InvariantCulture),
