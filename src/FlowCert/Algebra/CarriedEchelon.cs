@@ -48,9 +48,6 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
         this.columnCapacity = columnCapacity;
     }
 
-    /// <summary>The number of rows of B.</summary>
-    public int RowCount => rows.Count;
-
     /// <summary>Whether row <paramref name="id"/> is a row of B now.</summary>
     public bool HasRow(int id) => rowSlot.ContainsKey(id);
 

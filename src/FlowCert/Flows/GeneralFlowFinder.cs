@@ -58,7 +58,7 @@ internal static class GeneralFlowFinder
         long capacity = state.UnprocessedCount; // every later row and corrector is unprocessed now
         return typeof(TField) == typeof(PrimeField) && state.Layers.Count > 0
             && rankBound >= rule.MinRank && rankBound >= (long)rule.Ratio * state.Layers[^1].Length
-            && capacity * (capacity + state.Active.Length) <= rule.MaxEntries;
+            && capacity * (2 * capacity + state.Active.Length) <= rule.MaxEntries; // each row: X over rows, R over columns
     }
 
     /// <summary>The reduced form of this layer's block, built column by column, to be carried from now on.</summary>
