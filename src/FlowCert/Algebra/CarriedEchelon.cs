@@ -1,3 +1,6 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+
 namespace FlowCert.Algebra;
 
 /// <summary>
@@ -30,6 +33,7 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
     }
 
     private readonly TField f;
+    private readonly ulong prime; // p when the field is F_p: the row passes then use ModularElimination's Shoup loops
     private readonly List<Row> rows = [];
     private readonly Dictionary<int, int> rowSlot = [];
     private readonly Dictionary<int, int> columnSlot = [];
@@ -44,6 +48,7 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
     {
         if (!field.IsZero(default)) throw new ArgumentException("dense rows start as default(T), which must be the field's zero");
         f = field;
+        prime = field is PrimeField pf ? pf.P : 0;
         this.rowCapacity = rowCapacity;
         this.columnCapacity = columnCapacity;
     }
@@ -102,15 +107,24 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
         columnSlot.Add(id, c);
         var slots = new int[rowIds.Length];
         for (int e = 0; e < rowIds.Length; e++) slots[e] = rowSlot[rowIds[e]];
+        var quotients = new ulong[prime != 0 ? rowIds.Length : 0]; // over F_p each entry of b multiplies with its Shoup quotient
+        for (int e = 0; e < quotients.Length; e++) quotients[e] = Shoup.Quotient(Unsafe.As<T, ulong>(ref Unsafe.AsRef(in values[e])), prime);
         Row? k = null;
         foreach (var row in rows)
         {
-            var v = f.Zero;
-            for (int e = 0; e < slots.Length; e++)
+            var v = f.Zero; // (X b) for this row
+            if (typeof(T) == typeof(ulong) && prime != 0)
             {
-                var xs = row.X[slots[e]];
-                if (!f.IsZero(xs)) v = f.Add(v, f.Multiply(xs, values[e]));
+                var x = MemoryMarshal.Cast<T, ulong>(row.X.AsSpan());
+                var b = MemoryMarshal.Cast<T, ulong>(values);
+                ulong sum = 0;
+                for (int e = 0; e < slots.Length; e++)
+                    if (x[slots[e]] is not 0 and var xs) { sum += Shoup.Multiply(b[e], quotients[e], xs, prime); sum = Math.Min(sum, sum - prime); }
+                v = Unsafe.As<ulong, T>(ref sum);
             }
+            else
+                for (int e = 0; e < slots.Length; e++)
+                    if (!f.IsZero(row.X[slots[e]])) v = f.Add(v, f.Multiply(row.X[slots[e]], values[e]));
             row.R[c] = v;
             if (f.IsZero(v) || k is { Pivot: < 0 }) continue;
             if (row.Pivot < 0 || (row.Pivot > id && (k is null || row.Pivot > k.Pivot))) k = row;
@@ -171,6 +185,13 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
 
     private void Scale(Row row, T factor)
     {
+        if (typeof(T) == typeof(ulong) && prime != 0)
+        {
+            var w = Unsafe.As<T, ulong>(ref factor);
+            ModularElimination.ScaleShoup(MemoryMarshal.Cast<T, ulong>(row.R.AsSpan(0, columnsUsed)), w, prime);
+            ModularElimination.ScaleShoup(MemoryMarshal.Cast<T, ulong>(row.X.AsSpan(0, rowsUsed)), w, prime);
+            return;
+        }
         for (int j = 0; j < columnsUsed; j++) row.R[j] = f.Multiply(row.R[j], factor);
         for (int j = 0; j < rowsUsed; j++) row.X[j] = f.Multiply(row.X[j], factor);
     }
@@ -178,6 +199,13 @@ internal sealed class CarriedEchelon<T, TField> where T : struct where TField : 
     /// <summary>row -= factor * source, on both parts.</summary>
     private void SubtractMultiple(Row row, T factor, Row source)
     {
+        if (typeof(T) == typeof(ulong) && prime != 0)
+        {
+            var w = prime - Unsafe.As<T, ulong>(ref factor); // factor is not zero
+            ModularElimination.AddMulShoup(MemoryMarshal.Cast<T, ulong>(row.R.AsSpan(0, columnsUsed)), MemoryMarshal.Cast<T, ulong>(source.R.AsSpan(0, columnsUsed)), w, prime);
+            ModularElimination.AddMulShoup(MemoryMarshal.Cast<T, ulong>(row.X.AsSpan(0, rowsUsed)), MemoryMarshal.Cast<T, ulong>(source.X.AsSpan(0, rowsUsed)), w, prime);
+            return;
+        }
         for (int j = 0; j < columnsUsed; j++)
             if (!f.IsZero(source.R[j])) row.R[j] = f.Subtract(row.R[j], f.Multiply(factor, source.R[j]));
         for (int j = 0; j < rowsUsed; j++)

@@ -232,7 +232,7 @@ internal static class ModularElimination
 
     /// <summary>target = target + factor * source mod p, all entries below p.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
-    private static void AddMulShoup(Span<ulong> target, ReadOnlySpan<ulong> source, ulong factor, ulong p)
+    internal static void AddMulShoup(Span<ulong> target, ReadOnlySpan<ulong> source, ulong factor, ulong p)
     {
         ulong fq = (ulong)(((UInt128)factor << 64) / p);
         for (int j = 0; j < target.Length; j++)
@@ -248,7 +248,7 @@ internal static class ModularElimination
 
     /// <summary>row = factor * row mod p, entries below p.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)] // kernels run once per process: no slow first tier
-    private static void ScaleShoup(Span<ulong> row, ulong factor, ulong p)
+    internal static void ScaleShoup(Span<ulong> row, ulong factor, ulong p)
     {
         ulong fq = (ulong)(((UInt128)factor << 64) / p);
         for (int j = 0; j < row.Length; j++)
