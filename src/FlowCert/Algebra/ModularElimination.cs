@@ -17,7 +17,7 @@ internal static class ModularElimination
 {
     /// <summary>True when the block is dense enough for this kernel.</summary>
     public static bool PaysOff<T>(IReadOnlyList<SparseVector<T>> rows) where T : struct
-        => EchelonTransform<T>.PaysOff(rows, 8);
+        => EchelonTransform<T>.PaysOff(rows, 16);
 
     /// <summary>Eliminates B over F_p: the reduced echelon form of [B | I].</summary>
     public static IEliminationResult<ulong> Run(ulong p, IReadOnlyList<SparseVector<ulong>> rows)
