@@ -52,13 +52,13 @@ public class CarriedEchelonTests
                 else if (present.Count < colCap && columns < freeColumnIds.Count && matrix.Count > 0)
                 {
                     int id = freeColumnIds[columns++];
-                    var entries = matrix.Keys.Where(_ => rng.NextDouble() < density).Select(r => (r, nonZero(rng))).ToArray();
+                    var entries = matrix.Keys.Where(_ => rng.NextDouble() < density).Select(r => (Row: r, Value: nonZero(rng))).ToArray();
                     if (entries.Length == 0) continue;
                     int pivotsAbove = form.Result(matrix.Keys.ToArray()).SolveUnitVectors().Values.SelectMany(s => s.Indices).Count(c => c > id);
                     if (pivotsAbove > 0) moved++;
                     foreach (var (r, v) in entries) matrix[r][id] = v;
                     present.Add(id);
-                    form.AddColumn(id, entries.Select(e => e.r).ToArray(), entries.Select(e => e.Item2).ToArray());
+                    form.AddColumn(id, entries.Select(e => e.Row).ToArray(), entries.Select(e => e.Value).ToArray());
                 }
                 else continue;
                 Check(f, form, matrix, ref solvedRows, ref kernelRows);
@@ -81,7 +81,8 @@ public class CarriedEchelonTests
         var reference = new DenseMatrix<ulong, TField>(f, rows.Length, columnIds.Length);
         for (int i = 0; i < rows.Length; i++)
             for (int k = 0; k < rows[i].Count; k++) reference[i, Array.IndexOf(columnIds, rows[i].Indices[k])] = rows[i].Values[k];
-        Assert.Equal(reference.RowReduce().Item2.Length, carried.Rank);
+        var (_, referencePivots) = reference.RowReduce();
+        Assert.Equal(referencePivots.Length, carried.Rank);
 
         var expected = fresh.SolveUnitVectors();
         var actual = carried.SolveUnitVectors();
