@@ -20,9 +20,10 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress, bool
         var (next, missing) = (0, -1);
         foreach (var key in json.At("", "corrections", "corrections").NodeMap("corrections"))
         {
-            // the keys are sorted, so the key is usually the first measured node after the last one: no lookup
-            var v = Missing(next, g.Count) is >= 0 and var usual && g.Name(usual) == key ? usual : g.Measured(key, "corrections");
-            (missing, next) = (missing < 0 ? Missing(next, v) : missing, v + 1);
+            // the keys are sorted, so the key is usually the first measured node after the last one (no lookup);
+            // when it is not, that node (if below v) is the first without a vector: one scan serves both
+            var v = Missing(next, g.Count) is var usual && usual >= 0 && g.Name(usual) == key ? usual : g.Measured(key, "corrections");
+            (missing, next) = (missing < 0 && usual < v ? usual : missing, v + 1);
             CheckCorrection(v, json);
             if (progress.Due) progress.Show($"correction vectors checked up to node {v + 1:N0} of {g.Count:N0}");
         }
