@@ -19,7 +19,7 @@ public static class Program
             File.WriteAllText(outFile, FlowCert.Graphs.CanonicalForm.Write(Workloads.Band(int.Parse(fn, System.Globalization.CultureInfo.InvariantCulture), int.Parse(fwidth, System.Globalization.CultureInfo.InvariantCulture),
                 hubs: more is ["hubs", var fk] ? int.Parse(fk, System.Globalization.CultureInfo.InvariantCulture) : 0)));
         else if (args is ["band", var n, var width, var bandField, var bandReps, .. var rest]
-                 && (rest is [.. var shape, "fresh"] ? shape : rest) is [] or ["hub"] or ["hubs", _] && rest.Count(a => a == "fresh") <= 1)
+                 && (rest is [.. var shape, "fresh"] ? shape : rest) is [] or ["hub"] or ["hubs", _])
             KernelRunner.TimeBand(int.Parse(n, System.Globalization.CultureInfo.InvariantCulture), int.Parse(width, System.Globalization.CultureInfo.InvariantCulture),
                 bandField, int.Parse(bandReps, System.Globalization.CultureInfo.InvariantCulture), hub: rest is ["hub", ..],
                 hubs: rest is ["hubs", var k, ..] ? int.Parse(k, System.Globalization.CultureInfo.InvariantCulture) : 0, fresh: rest is [.., "fresh"]);
