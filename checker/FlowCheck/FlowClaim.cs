@@ -22,6 +22,7 @@ public sealed class FlowClaim(FieldGraph g, bool causal, Progress progress, bool
         {
             // the keys are sorted, so the key is usually the first measured node after the last one (no lookup);
             // when it is not, that node (if below v) is the first without a vector: one scan serves both
+            // Stryker disable once Equality: usual > 0 only looks node 0 up instead of guessing it (the same node); the == on this line was killed (2026-12-03)
             var v = Missing(next, g.Count) is var usual && usual >= 0 && g.Name(usual) == key ? usual : g.Measured(key, "corrections");
             (missing, next) = (missing < 0 && usual < v ? usual : missing, v + 1);
             CheckCorrection(v, json);
